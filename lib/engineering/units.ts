@@ -1,0 +1,233 @@
+// Unit conversion at the edges. Everything inside lib/engineering is SI: m, m², Pa, kg/s, m³/s, K, kg/m³.
+// Conversions go through a private mathjs instance that knows only units, plus the two pressure units
+// mathjs lacks (inch of mercury and inch of water, conventional values of NIST SP 811, appendix B.8).
+
+import { create, createUnitDependencies, unitDependencies } from "mathjs";
+import type { PressureReference } from "./types";
+
+// mathjs types its dependency maps as possibly undefined under noUncheckedIndexedAccess; they are always there.
+function dependency<T>(map: T | undefined, name: string): T {
+  if (map === undefined) throw new Error(`mathjs: ${name} is missing`);
+  return map;
+}
+
+const math = create({
+  unitDependencies: dependency(unitDependencies, "unitDependencies"),
+  createUnitDependencies: dependency(createUnitDependencies, "createUnitDependencies"),
+});
+
+// NIST SP 811 (2008), B.8: inch of mercury, conventional = 3.386 389 E+03 Pa
+// (13 595.1 kg/m³ x 9.806 65 m/s² x 0.0254 m).
+export const PA_PER_INHG = 3386.389;
+// NIST SP 811 (2008), B.8: inch of water, conventional = 2.490 889 E+02 Pa
+// (1000 kg/m³ x 9.806 65 m/s² x 0.0254 m). The same table gives 2.490 82 E+02 Pa for water at 39.2 °F;
+// the two differ by 0.003 %, far below what a manometer reads.
+export const PA_PER_INH2O = 249.0889;
+// ISO 2533 / NIST SP 811: standard atmosphere = 101 325 Pa.
+export const STANDARD_ATMOSPHERE_PA = 101325;
+
+math.createUnit({
+  inHg: { definition: `${PA_PER_INHG} Pa` },
+  inH2O: { definition: `${PA_PER_INH2O} Pa` },
+});
+
+export const LENGTH_UNITS = ["in", "mm", "m"] as const;
+export const AREA_UNITS = ["in²", "mm²", "m²"] as const;
+export const PRESSURE_UNITS = ["psi", "kPa", "Pa", "bar", "inHg", "inH2O"] as const;
+export const MASS_FLOW_UNITS = ["lb/h", "kg/h", "g/s", "kg/s"] as const;
+/** "gal/h" is the US liquid gallon (231 in³). */
+export const VOLUME_FLOW_UNITS = ["cc/min", "L/h", "gal/h", "m³/s"] as const;
+export const TEMPERATURE_UNITS = ["°F", "°C", "K"] as const;
+/** "lb/gal" is pounds (mass) per US liquid gallon. */
+export const DENSITY_UNITS = ["kg/m³", "g/cc", "lb/gal"] as const;
+
+export type LengthUnit = (typeof LENGTH_UNITS)[number];
+export type AreaUnit = (typeof AREA_UNITS)[number];
+export type PressureUnit = (typeof PRESSURE_UNITS)[number];
+export type MassFlowUnit = (typeof MASS_FLOW_UNITS)[number];
+export type VolumeFlowUnit = (typeof VOLUME_FLOW_UNITS)[number];
+export type TemperatureUnit = (typeof TEMPERATURE_UNITS)[number];
+export type DensityUnit = (typeof DENSITY_UNITS)[number];
+
+/** The unit names each quantity kind accepts. */
+export interface UnitsByKind {
+  length: LengthUnit;
+  area: AreaUnit;
+  pressure: PressureUnit;
+  massFlow: MassFlowUnit;
+  volumeFlow: VolumeFlowUnit;
+  temperature: TemperatureUnit;
+  density: DensityUnit;
+}
+
+export type QuantityKind = keyof UnitsByKind;
+
+export const UNITS_BY_KIND: { readonly [K in QuantityKind]: readonly UnitsByKind[K][] } = {
+  length: LENGTH_UNITS,
+  area: AREA_UNITS,
+  pressure: PRESSURE_UNITS,
+  massFlow: MASS_FLOW_UNITS,
+  volumeFlow: VOLUME_FLOW_UNITS,
+  temperature: TEMPERATURE_UNITS,
+  density: DENSITY_UNITS,
+};
+
+/** The SI unit every value of a kind is held in inside lib/engineering. */
+export const SI_UNIT: { readonly [K in QuantityKind]: UnitsByKind[K] } = {
+  length: "m",
+  area: "m²",
+  pressure: "Pa",
+  massFlow: "kg/s",
+  volumeFlow: "m³/s",
+  temperature: "K",
+  density: "kg/m³",
+};
+
+// Our unit names -> mathjs unit expressions.
+const MATHJS_UNIT: { readonly [K in QuantityKind]: Readonly<Record<UnitsByKind[K], string>> } = {
+  length: { in: "in", mm: "mm", m: "m" },
+  area: { "in²": "in^2", "mm²": "mm^2", "m²": "m^2" },
+  pressure: { psi: "psi", kPa: "kPa", Pa: "Pa", bar: "bar", inHg: "inHg", inH2O: "inH2O" },
+  massFlow: { "lb/h": "lbm/h", "kg/h": "kg/h", "g/s": "g/s", "kg/s": "kg/s" },
+  volumeFlow: { "cc/min": "cc/min", "L/h": "L/h", "gal/h": "gal/h", "m³/s": "m^3/s" },
+  temperature: { "°F": "degF", "°C": "degC", K: "K" },
+  density: { "kg/m³": "kg/m^3", "g/cc": "g/cc", "lb/gal": "lbm/gal" },
+};
+
+const MATHJS_SI: { readonly [K in QuantityKind]: string } = {
+  length: "m",
+  area: "m^2",
+  pressure: "Pa",
+  massFlow: "kg/s",
+  volumeFlow: "m^3/s",
+  temperature: "K",
+  density: "kg/m^3",
+};
+
+function mathjsUnit<K extends QuantityKind>(kind: K, unit: UnitsByKind[K]): string {
+  const table: Readonly<Record<string, string>> = MATHJS_UNIT[kind];
+  const expr = table[unit];
+  if (expr === undefined) throw new RangeError(`unit: "${String(unit)}" is not a ${kind} unit`);
+  return expr;
+}
+
+function requireFinite(value: number, field: string): void {
+  if (!Number.isFinite(value)) throw new RangeError(`${field}: expected a finite number, got ${value}`);
+}
+
+/**
+ * Converts a value in the given unit to SI. Temperatures are points on the scale (68 °F -> 293.15 K), not
+ * differences. Pressures here are plain magnitudes (a pressure difference across a jet, say); a pressure that
+ * sits on a scale with a reference belongs in a `Pressure` (see `pressure()`).
+ */
+export function toSI<K extends QuantityKind>(kind: K, value: number, unit: UnitsByKind[K]): number {
+  requireFinite(value, "value");
+  return math.unit(value, mathjsUnit(kind, unit)).toNumber(MATHJS_SI[kind]);
+}
+
+/** Converts an SI value to the given unit; the inverse of `toSI`. */
+export function fromSI<K extends QuantityKind>(kind: K, valueSI: number, unit: UnitsByKind[K]): number {
+  requireFinite(valueSI, "valueSI");
+  return math.unit(valueSI, MATHJS_SI[kind]).toNumber(mathjsUnit(kind, unit));
+}
+
+/** Converts between two units of one kind. */
+export function convert<K extends QuantityKind>(
+  kind: K,
+  value: number,
+  from: UnitsByKind[K],
+  to: UnitsByKind[K],
+): number {
+  return fromSI(kind, toSI(kind, value, from), to);
+}
+
+// ---------------------------------------------------------------------------------------------------------
+// Pressures with a reference. A gauge pressure and an absolute pressure are different types, so a function
+// that needs one cannot be handed the other without an explicit conversion.
+
+export interface GaugePressure {
+  readonly reference: "gauge";
+  /** Pascals above (positive: boost) or below (negative: vacuum) the ambient atmosphere. */
+  readonly pa: number;
+}
+
+export interface AbsolutePressure {
+  readonly reference: "absolute";
+  /** Pascals above a perfect vacuum; never negative. */
+  readonly pa: number;
+}
+
+export type Pressure = GaugePressure | AbsolutePressure;
+
+export function gaugePressure(pa: number): GaugePressure {
+  requireFinite(pa, "pa");
+  return { reference: "gauge", pa };
+}
+
+export function absolutePressure(pa: number): AbsolutePressure {
+  requireFinite(pa, "pa");
+  if (pa < 0) throw new RangeError(`pa: an absolute pressure cannot be negative, got ${pa} Pa`);
+  return { reference: "absolute", pa };
+}
+
+/** A pressure read in the given unit, with its reference stated: `pressure(8, "psi", "gauge")`. */
+export function pressure(value: number, unit: PressureUnit, reference: "gauge"): GaugePressure;
+export function pressure(value: number, unit: PressureUnit, reference: "absolute"): AbsolutePressure;
+export function pressure(value: number, unit: PressureUnit, reference: PressureReference): Pressure;
+export function pressure(value: number, unit: PressureUnit, reference: PressureReference): Pressure {
+  const pa = toSI("pressure", value, unit);
+  return reference === "gauge" ? gaugePressure(pa) : absolutePressure(pa);
+}
+
+/** The value of a pressure in the given unit, keeping its reference (the caller knows which one it holds). */
+export function pressureIn(p: Pressure, unit: PressureUnit): number {
+  return fromSI("pressure", p.pa, unit);
+}
+
+function requireAmbient(ambientPa: number): void {
+  requireFinite(ambientPa, "ambientPa");
+  if (ambientPa <= 0) throw new RangeError(`ambientPa: must be above zero, got ${ambientPa} Pa`);
+}
+
+/** Absolute pressure from a gauge reading; the ambient defaults to the standard atmosphere. */
+export function absoluteFromGauge(p: GaugePressure, ambientPa: number = STANDARD_ATMOSPHERE_PA): AbsolutePressure {
+  requireAmbient(ambientPa);
+  const pa = ambientPa + p.pa;
+  if (pa < 0) {
+    throw new RangeError(`pa: ${p.pa} Pa gauge is below a perfect vacuum at an ambient of ${ambientPa} Pa`);
+  }
+  return { reference: "absolute", pa };
+}
+
+/** Gauge pressure from an absolute one; the ambient defaults to the standard atmosphere. */
+export function gaugeFromAbsolute(p: AbsolutePressure, ambientPa: number = STANDARD_ATMOSPHERE_PA): GaugePressure {
+  requireAmbient(ambientPa);
+  return { reference: "gauge", pa: p.pa - ambientPa };
+}
+
+/** Either kind of pressure as absolute. */
+export function toAbsolute(p: Pressure, ambientPa: number = STANDARD_ATMOSPHERE_PA): AbsolutePressure {
+  return p.reference === "absolute" ? p : absoluteFromGauge(p, ambientPa);
+}
+
+/** Either kind of pressure as gauge. */
+export function toGauge(p: Pressure, ambientPa: number = STANDARD_ATMOSPHERE_PA): GaugePressure {
+  return p.reference === "gauge" ? p : gaugeFromAbsolute(p, ambientPa);
+}
+
+/**
+ * Manifold vacuum read in inHg (a gauge reading below the atmosphere, written as a positive number) as an
+ * absolute pressure: 0 inHg of vacuum is the ambient pressure, more vacuum is less pressure.
+ */
+export function absoluteFromVacuumInHg(vacuumInHg: number, ambientPa: number = STANDARD_ATMOSPHERE_PA): AbsolutePressure {
+  requireFinite(vacuumInHg, "vacuumInHg");
+  if (vacuumInHg < 0) {
+    throw new RangeError(`vacuumInHg: a vacuum reading is written as a positive number, got ${vacuumInHg}`);
+  }
+  return absoluteFromGauge(gaugePressure(-vacuumInHg * PA_PER_INHG), ambientPa);
+}
+
+/** Manifold vacuum in inHg (positive below the ambient) of an absolute pressure; negative under boost. */
+export function vacuumInHgFromAbsolute(p: AbsolutePressure, ambientPa: number = STANDARD_ATMOSPHERE_PA): number {
+  return -gaugeFromAbsolute(p, ambientPa).pa / PA_PER_INHG;
+}
