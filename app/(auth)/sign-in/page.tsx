@@ -1,0 +1,41 @@
+import type { Metadata } from "next";
+import { redirect } from "next/navigation";
+import { getSessionUser } from "@/lib/auth/session";
+import { SafetyNote } from "@/components/ui/safety-note";
+import { SAFETY_CAUTIONS } from "@/lib/safety";
+import { SignInForm } from "./sign-in-form";
+
+export const metadata: Metadata = { title: "Sign in" };
+
+function safeReturnPath(value: string | string[] | undefined): string {
+  const path = Array.isArray(value) ? value[0] : value;
+  // Only same-site paths: never send a user on to another host after signing in.
+  return path && path.startsWith("/") && !path.startsWith("//") ? path : "/";
+}
+
+export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+  const params = await searchParams;
+  const returnTo = safeReturnPath(params.callbackUrl);
+  if (await getSessionUser()) redirect(returnTo);
+  return (
+    <main className="mx-auto grid min-h-dvh max-w-5xl items-center gap-10 px-6 py-10 md:grid-cols-[1.1fr_1fr]">
+      <div>
+        <p className="text-xs font-semibold uppercase tracking-[0.2em] text-pencil">Metering-block conversions</p>
+        <h1 className="mt-2 text-5xl font-bold tracking-tight">Blockwright</h1>
+        <p className="mt-4 max-w-md text-lg text-graphite">
+          Plan the restriction holes, the plug and the grind for every block of a blow-through carburetor, print its
+          traveler, and sign the work off at the bench.
+        </p>
+        <div className="mt-8 hidden max-w-md md:block">
+          <SafetyNote signal="NOTICE" title={SAFETY_CAUTIONS.general.title}>
+            {SAFETY_CAUTIONS.general.text}
+          </SafetyNote>
+        </div>
+      </div>
+      <div className="rounded-[var(--radius-sheet)] border-2 border-ink bg-sheet p-8 shadow-[6px_6px_0_var(--color-rule)]">
+        <h2 className="mb-6 text-xl font-semibold">Sign in</h2>
+        <SignInForm returnTo={returnTo} />
+      </div>
+    </main>
+  );
+}

@@ -1,0 +1,21 @@
+import { z } from "zod";
+
+const roleSchema = z.enum(["admin", "tuner", "machinist"], { error: "Choose a role: admin, tuner or machinist." });
+
+export const createUserSchema = z.object({
+  name: z.string({ error: "Enter the person's name." }).trim().min(2, { error: "Enter the person's name." }).max(80),
+  email: z.email({ error: "Enter a valid e-mail address." }),
+  role: roleSchema,
+  password: z
+    .string({ error: "Set a starting password of at least 10 characters." })
+    .min(10, { error: "Set a starting password of at least 10 characters." })
+    .max(200),
+});
+
+export const updateUserSchema = z
+  .object({
+    userId: z.uuid({ error: "userId must be a user's id." }),
+    role: roleSchema.optional(),
+    active: z.enum(["true", "false"], { error: "active must be true or false." }).transform((v) => v === "true").optional(),
+  })
+  .refine((v) => v.role !== undefined || v.active !== undefined, { error: "Change the role or the active state.", path: ["role"] });

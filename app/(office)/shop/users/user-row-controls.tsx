@@ -1,0 +1,44 @@
+"use client";
+
+import { useActionState } from "react";
+import { Button } from "@/components/ui/button";
+import { Select } from "@/components/ui/field";
+import type { UserRole } from "@/db/schema";
+import { updateUserAction } from "./actions";
+
+export function UserRowControls({ user }: { user: { id: string; name: string; role: UserRole; active: boolean } }) {
+  const [result, action, pending] = useActionState(updateUserAction, undefined);
+  const error = result && result.httpStatus !== 200 ? (result.error?.[""] ?? Object.values(result.error ?? {}).flat()) : undefined;
+  return (
+    <div className="flex flex-col gap-1">
+      <div className="flex flex-wrap items-center gap-2">
+        <form action={action} className="flex items-center gap-2">
+          <input type="hidden" name="userId" value={user.id} />
+          <label className="sr-only" htmlFor={`role-${user.id}`}>
+            Role of {user.name}
+          </label>
+          <Select id={`role-${user.id}`} name="role" defaultValue={user.role} className="w-36" disabled={!user.active}>
+            <option value="admin">admin</option>
+            <option value="tuner">tuner</option>
+            <option value="machinist">machinist</option>
+          </Select>
+          <Button type="submit" variant="secondary" disabled={pending || !user.active}>
+            Set role
+          </Button>
+        </form>
+        <form action={action}>
+          <input type="hidden" name="userId" value={user.id} />
+          <input type="hidden" name="active" value={user.active ? "false" : "true"} />
+          <Button type="submit" variant="quiet" disabled={pending}>
+            {user.active ? "Deactivate" : "Reactivate"}
+          </Button>
+        </form>
+      </div>
+      {error?.length ? (
+        <p role="alert" className="text-sm text-fault">
+          {error.join(" ")}
+        </p>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,18 @@
+import type { Metadata, Viewport } from "next";
+import { mono, sans } from "./fonts";
+import "./globals.css";
+
+export const metadata: Metadata = {
+  title: { default: "Blockwright", template: "%s · Blockwright" },
+  description: "Metering-block conversions for boosted carbureted engines: plans, travelers and bench records.",
+};
+
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#f5f3ec" };
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en" className={`${sans.variable} ${mono.variable}`}>
+      <body className="antialiased">{children}</body>
+    </html>
+  );
+}

@@ -1,0 +1,29 @@
+import type { UserRole } from "@/db/schema";
+
+export interface NavLink {
+  href: string;
+  label: string;
+  /** What the place is for, shown on the home page. */
+  purpose: string;
+  roles: readonly UserRole[];
+}
+
+// The places of the app, in the order they appear. A role sees only the places it may use.
+export const PLACES: NavLink[] = [
+  {
+    href: "/reference",
+    label: "Reference",
+    purpose: "Drill and tap-drill charts, and the calculators for holes, plugs, grinds, tubes and staging.",
+    roles: ["admin", "tuner", "machinist"],
+  },
+  {
+    href: "/shop/users",
+    label: "Shop",
+    purpose: "Users and roles: who may plan, who works at the bench, who runs the shop.",
+    roles: ["admin"],
+  },
+];
+
+export function navigationFor(role: UserRole): NavLink[] {
+  return PLACES.filter((place) => place.roles.includes(role));
+}

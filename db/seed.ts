@@ -1,0 +1,37 @@
+// Demo data for an invented shop. Idempotent: running it again changes nothing that exists.
+// Every name, customer and engine here is made up.
+import bcrypt from "bcryptjs";
+import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
+import path from "node:path";
+import { Pool } from "pg";
+import * as schema from "./schema";
+
+export const DEMO_PASSWORD = "blockwright-demo";
+
+export const DEMO_USERS = [
+  { email: "admin@blockwright.test", name: "Avery Lindqvist", role: "admin" },
+  { email: "tuner@blockwright.test", name: "Mara Quillon", role: "tuner" },
+  { email: "machinist@blockwright.test", name: "Theo Varga", role: "machinist" },
+] as const;
+
+export async function seedDemo(db: NodePgDatabase<typeof schema>): Promise<void> {
+  const passwordHash = await bcrypt.hash(DEMO_PASSWORD, 10);
+  for (const user of DEMO_USERS) {
+    await db
+      .insert(schema.users)
+      .values({ ...user, passwordHash })
+      .onConflictDoNothing({ target: schema.users.email });
+  }
+}
+
+if (process.argv[1] && path.resolve(process.argv[1]) === path.resolve(import.meta.filename)) {
+  const url = process.env.DATABASE_URL;
+  if (!url) throw new Error("DATABASE_URL is not set");
+  const pool = new Pool({ connectionString: url, max: 1 });
+  try {
+    await seedDemo(drizzle(pool, { schema }));
+    console.log("[blockwright] demo data seeded");
+  } finally {
+    await pool.end();
+  }
+}

@@ -1,0 +1,115 @@
+import "server-only";
+import { and, asc, count, eq } from "drizzle-orm";
+import { getDb, type Executor } from "./client";
+import { recordAudit } from "./audit";
+import { users, type UserRole } from "./schema";
+
+/** What the app may know about a user: never the password hash. */
+export interface UserSummary {
+  id: string;
+  email: string;
+  name: string;
+  role: UserRole;
+  active: boolean;
+  lengthUnit: "in" | "mm";
+}
+
+const summaryColumns = {
+  id: users.id,
+  email: users.email,
+  name: users.name,
+  role: users.role,
+  active: users.active,
+  lengthUnit: users.lengthUnit,
+};
+
+export function normalizeEmail(email: string): string {
+  return email.trim().toLowerCase();
+}
+
+/** For the credentials check only: the one read that returns the hash. */
+export async function getUserCredentials(email: string) {
+  const [row] = await getDb()
+    .select({ ...summaryColumns, passwordHash: users.passwordHash })
+    .from(users)
+    .where(eq(users.email, normalizeEmail(email)));
+  return row;
+}
+
+export async function getActiveUser(id: string): Promise<UserSummary | undefined> {
+  const [row] = await getDb()
+    .select(summaryColumns)
+    .from(users)
+    .where(and(eq(users.id, id), eq(users.active, true)));
+  return row;
+}
+
+export async function listUsers(): Promise<UserSummary[]> {
+  return getDb().select(summaryColumns).from(users).orderBy(asc(users.name));
+}
+
+export async function listActiveUsersByRole(role: UserRole): Promise<UserSummary[]> {
+  return getDb()
+    .select(summaryColumns)
+    .from(users)
+    .where(and(eq(users.role, role), eq(users.active, true)))
+    .orderBy(asc(users.name));
+}
+
+export class DuplicateEmailError extends Error {
+  constructor(email: string) {
+    super(`A user with the e-mail ${email} already exists`);
+  }
+}
+
+export async function createUser(input: {
+  actorId: string;
+  email: string;
+  name: string;
+  role: UserRole;
+  passwordHash: string;
+}): Promise<UserSummary> {
+  const email = normalizeEmail(input.email);
+  return getDb().transaction(async (tx) => {
+    const [existing] = await tx.select({ id: users.id }).from(users).where(eq(users.email, email));
+    if (existing) throw new DuplicateEmailError(email);
+    const [created] = await tx
+      .insert(users)
+      .values({ email, name: input.name.trim(), role: input.role, passwordHash: input.passwordHash })
+      .returning(summaryColumns);
+    if (!created) throw new Error("insert returned no row");
+    await recordAudit(tx, input.actorId, "user.create", created.id, { email, role: input.role });
+    return created;
+  });
+}
+
+export async function updateUser(input: {
+  actorId: string;
+  userId: string;
+  role?: UserRole;
+  active?: boolean;
+}): Promise<UserSummary | undefined> {
+  return getDb().transaction(async (tx) => {
+    const [updated] = await tx
+      .update(users)
+      .set({ role: input.role, active: input.active, updatedAt: new Date() })
+      .where(eq(users.id, input.userId))
+      .returning(summaryColumns);
+    if (updated) {
+      await recordAudit(tx, input.actorId, "user.update", updated.id, { role: input.role, active: input.active });
+    }
+    return updated;
+  });
+}
+
+export async function countActiveAdmins(db: Executor = getDb()): Promise<number> {
+  const [row] = await db
+    .select({ n: count() })
+    .from(users)
+    .where(and(eq(users.role, "admin"), eq(users.active, true)));
+  return row?.n ?? 0;
+}
+
+export async function setLengthUnit(userId: string, lengthUnit: "in" | "mm"): Promise<void> {
+  await getDb().update(users).set({ lengthUnit, updatedAt: new Date() }).where(eq(users.id, userId));
+}

@@ -1,0 +1,9 @@
+import nextVitals from "eslint-config-next/core-web-vitals";
+import nextTypescript from "eslint-config-next/typescript";
+
+const config = [
+  ...nextVitals,
+  ...nextTypescript,
+  { ignores: [".next/**", ".next-test/**", ".data/**", "node_modules/**", "test-results/**", "playwright-report/**", "next-env.d.ts"] },
+];
+export default config;

@@ -1,0 +1,59 @@
+import "server-only";
+import { NextResponse } from "next/server";
+import type { z } from "zod";
+import type { UserRole } from "@/db/schema";
+import { checkRole, type SessionUser } from "@/lib/auth/session";
+import { RequestRefusal } from "@/lib/errors";
+
+export type ApiErrorCode = "invalid_input" | "unauthenticated" | "forbidden" | "not_found" | "conflict" | "internal";
+
+export interface ApiError {
+  error: { code: ApiErrorCode; message: string; field?: string; issues?: { field: string; message: string }[] };
+}
+
+export function apiError(status: number, code: ApiErrorCode, message: string, extra: Partial<ApiError["error"]> = {}) {
+  return NextResponse.json<ApiError>({ error: { code, message, ...extra } }, { status });
+}
+
+/** A 400 that names the first offending field, with every issue listed. */
+export function invalidInput(error: z.ZodError) {
+  const issues = error.issues.map((issue) => ({
+    field: issue.path.length ? issue.path.map(String).join(".") : "(body)",
+    message: issue.message,
+  }));
+  const first = issues[0] ?? { field: "(body)", message: "Invalid input" };
+  return apiError(400, "invalid_input", `${first.field}: ${first.message}`, { field: first.field, issues });
+}
+
+export type ParsedJson = { ok: true; value: unknown } | { ok: false; response: NextResponse };
+
+export async function readJson(request: Request): Promise<ParsedJson> {
+  try {
+    return { ok: true, value: await request.json() };
+  } catch {
+    return { ok: false, response: apiError(400, "invalid_input", "(body): the request body is not valid JSON", { field: "(body)" }) };
+  }
+}
+
+export type Authorized = { ok: true; user: SessionUser } | { ok: false; response: NextResponse };
+
+/** 401 for anonymous callers, 403 for the wrong role. */
+export async function authorize(roles: readonly UserRole[]): Promise<Authorized> {
+  const access = await checkRole(roles);
+  if (access.ok) return access;
+  return {
+    ok: false,
+    response: apiError(access.status, access.status === 401 ? "unauthenticated" : "forbidden", access.message),
+  };
+}
+
+/** Maps a refusal from the shared work to its JSON answer; anything else is logged and hidden. */
+export function refusalResponse(error: unknown) {
+  if (error instanceof RequestRefusal) {
+    const code: ApiErrorCode =
+      error.status === 404 ? "not_found" : error.status === 409 ? "conflict" : error.status === 403 ? "forbidden" : "invalid_input";
+    return apiError(error.status, code, error.field ? `${error.field}: ${error.message}` : error.message, { field: error.field });
+  }
+  console.error(error);
+  return apiError(500, "internal", "Something went wrong on the server.");
+}

@@ -1,0 +1,32 @@
+import "server-only";
+import { countActiveAdmins, createUser, DuplicateEmailError, getActiveUser, updateUser, type UserSummary } from "@/db/users";
+import type { UserRole } from "@/db/schema";
+import { RequestRefusal } from "@/lib/errors";
+import { hashPassword } from "./credentials";
+
+export async function createAccount(
+  actorId: string,
+  input: { email: string; name: string; role: UserRole; password: string },
+): Promise<UserSummary> {
+  try {
+    return await createUser({ actorId, email: input.email, name: input.name, role: input.role, passwordHash: await hashPassword(input.password) });
+  } catch (error) {
+    if (error instanceof DuplicateEmailError) throw new RequestRefusal(409, error.message, "email");
+    throw error;
+  }
+}
+
+/** Role changes and deactivation; the shop must always keep one active admin. */
+export async function changeAccount(
+  actorId: string,
+  input: { userId: string; role?: UserRole; active?: boolean },
+): Promise<UserSummary> {
+  const target = await getActiveUser(input.userId);
+  const losesAdmin = target?.role === "admin" && ((input.role && input.role !== "admin") || input.active === false);
+  if (losesAdmin && (await countActiveAdmins()) <= 1) {
+    throw new RequestRefusal(409, "The shop needs at least one active admin.", input.role ? "role" : "active");
+  }
+  const updated = await updateUser({ actorId, ...input });
+  if (!updated) throw new RequestRefusal(404, "No such user.", "userId");
+  return updated;
+}

@@ -1,0 +1,52 @@
+import "server-only";
+import type { NextAuthOptions } from "next-auth";
+import CredentialsProvider from "next-auth/providers/credentials";
+import { z } from "zod";
+import { SignInRefused, verifyCredentials } from "./credentials";
+
+const credentialsSchema = z.object({
+  email: z.email(),
+  password: z.string().min(1),
+});
+
+// A machinist's session should outlast a shift at the bench.
+const SESSION_HOURS = 14;
+
+function clientAddress(headers: Record<string, unknown> | undefined): string {
+  const forwarded = headers?.["x-forwarded-for"];
+  const first = typeof forwarded === "string" ? forwarded.split(",")[0]?.trim() : undefined;
+  const real = headers?.["x-real-ip"];
+  return first || (typeof real === "string" ? real : "") || "unknown";
+}
+
+export const authOptions: NextAuthOptions = {
+  session: { strategy: "jwt", maxAge: SESSION_HOURS * 60 * 60 },
+  pages: { signIn: "/sign-in" },
+  providers: [
+    CredentialsProvider({
+      name: "E-mail and password",
+      credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
+      async authorize(raw, req) {
+        const parsed = credentialsSchema.safeParse(raw);
+        if (!parsed.success) throw new Error("Enter an e-mail address and a password.");
+        try {
+          return await verifyCredentials({ ...parsed.data, address: clientAddress(req?.headers) });
+        } catch (error) {
+          if (error instanceof SignInRefused) throw new Error(error.message);
+          throw error;
+        }
+      },
+    }),
+  ],
+  callbacks: {
+    // The token only carries the user's id; role and active state are read from the database on
+    // every request (lib/auth/session.ts), so a role change or deactivation takes effect at once.
+    jwt({ token, user }) {
+      if (user) token.sub = user.id;
+      return token;
+    },
+    session({ session, token }) {
+      return { ...session, userId: token.sub };
+    },
+  },
+};

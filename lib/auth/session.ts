@@ -1,0 +1,41 @@
+import "server-only";
+import { getServerSession } from "next-auth";
+import { forbidden, redirect } from "next/navigation";
+import { getActiveUser, type UserSummary } from "@/db/users";
+import type { UserRole } from "@/db/schema";
+import { authOptions } from "./options";
+
+export type SessionUser = UserSummary;
+
+/** The signed-in, still active user, or null. Role comes from the database, not from the cookie. */
+export async function getSessionUser(): Promise<SessionUser | null> {
+  const session = await getServerSession(authOptions);
+  const userId = (session as { userId?: string } | null)?.userId;
+  if (!userId) return null;
+  return (await getActiveUser(userId)) ?? null;
+}
+
+export type AccessCheck =
+  | { ok: true; user: SessionUser }
+  | { ok: false; status: 401 | 403; message: string };
+
+/** The one role check used by pages, route handlers and server actions. */
+export async function checkRole(roles: readonly UserRole[]): Promise<AccessCheck> {
+  const user = await getSessionUser();
+  if (!user) return { ok: false, status: 401, message: "Sign in to continue." };
+  if (!roles.includes(user.role)) {
+    return { ok: false, status: 403, message: "Your role does not allow this." };
+  }
+  return { ok: true, user };
+}
+
+/** For pages: anonymous users go to sign-in, the wrong role sees the forbidden page. */
+export async function requireRole(roles: readonly UserRole[], returnTo = "/"): Promise<SessionUser> {
+  const check = await checkRole(roles);
+  if (check.ok) return check.user;
+  if (check.status === 401) redirect(`/sign-in?callbackUrl=${encodeURIComponent(returnTo)}`);
+  forbidden();
+}
+
+export const ALL_ROLES: readonly UserRole[] = ["admin", "tuner", "machinist"];
+export const OFFICE_ROLES: readonly UserRole[] = ["admin", "tuner"];

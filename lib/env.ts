@@ -1,0 +1,37 @@
+import "server-only";
+import { z } from "zod";
+
+// The one place that reads process.env. Validated on first use, not at import, so that
+// `next build` can load modules without a running database.
+const envSchema = z.object({
+  DATABASE_URL: z.url({ error: "DATABASE_URL must be a postgres:// URL" }),
+  NEXTAUTH_SECRET: z.string().min(16, { error: "NEXTAUTH_SECRET must be at least 16 characters" }),
+  APP_BASE_URL: z.url().default("http://127.0.0.1:3000"),
+  SMTP_HOST: z.string().default("127.0.0.1"),
+  SMTP_PORT: z.coerce.number().int().positive().default(2525),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  MAIL_FROM: z.string().default("Blockwright <no-reply@blockwright.test>"),
+  MAIL_OUTBOX_DIR: z.string().default(".data/outbox"),
+  S3_ENDPOINT: z.url().default("http://127.0.0.1:4569"),
+  S3_REGION: z.string().default("us-east-1"),
+  S3_BUCKET: z.string().default("blockwright"),
+  S3_ACCESS_KEY_ID: z.string().default("S3RVER"),
+  S3_SECRET_ACCESS_KEY: z.string().default("S3RVER"),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+let cached: Env | undefined;
+
+export function getEnv(): Env {
+  if (!cached) {
+    const parsed = envSchema.safeParse(process.env);
+    if (!parsed.success) {
+      const fields = parsed.error.issues.map((issue) => `${issue.path.join(".")}: ${issue.message}`);
+      throw new Error(`Invalid configuration:\n  ${fields.join("\n  ")}`);
+    }
+    cached = parsed.data;
+  }
+  return cached;
+}

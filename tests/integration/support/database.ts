@@ -1,0 +1,49 @@
+import { sql } from "drizzle-orm";
+import { drizzle } from "drizzle-orm/node-postgres";
+import { Pool } from "pg";
+import * as schema from "@/db/schema";
+import { DEMO_USERS, seedDemo } from "@/db/seed";
+import { setSessionUserId } from "./session-double";
+
+const pool = new Pool({ connectionString: process.env.DATABASE_URL, max: 2 });
+export const testDb = drizzle(pool, { schema });
+
+/** Empties every table and puts the demo accounts back. */
+export async function resetDatabase(): Promise<void> {
+  const tables = await testDb.execute<{ tablename: string }>(
+    sql`SELECT tablename FROM pg_tables WHERE schemaname = 'public'`,
+  );
+  const names = tables.rows.map((row) => `"${row.tablename}"`).join(", ");
+  if (names) await testDb.execute(sql.raw(`TRUNCATE ${names} RESTART IDENTITY CASCADE`));
+  await seedDemo(testDb);
+  setSessionUserId(null);
+}
+
+export type Actor = "anonymous" | (typeof DEMO_USERS)[number]["role"];
+export const ACTORS: Actor[] = ["anonymous", "machinist", "tuner", "admin"];
+
+/** Signs the given demo role in (or nobody). */
+export async function actAs(actor: Actor): Promise<string | null> {
+  if (actor === "anonymous") {
+    setSessionUserId(null);
+    return null;
+  }
+  const email = DEMO_USERS.find((user) => user.role === actor)!.email;
+  const [row] = await testDb.select({ id: schema.users.id }).from(schema.users).where(sql`${schema.users.email} = ${email}`);
+  setSessionUserId(row!.id);
+  return row!.id;
+}
+
+export function formData(fields: Record<string, string>): FormData {
+  const data = new FormData();
+  for (const [name, value] of Object.entries(fields)) data.set(name, value);
+  return data;
+}
+
+export function jsonRequest(url: string, method: string, body?: unknown): Request {
+  return new Request(`http://127.0.0.1${url}`, {
+    method,
+    headers: { "content-type": "application/json" },
+    body: body === undefined ? undefined : typeof body === "string" ? body : JSON.stringify(body),
+  });
+}
