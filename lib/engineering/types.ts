@@ -15,7 +15,7 @@ export interface Drill {
 /** Fuel properties the computations need. */
 export interface FuelProperties {
   name: string;
-  /** Liquid density at about 15 °C, kg/m³. */
+  /** Liquid density near room temperature (15-20 °C), kg/m³. */
   densityKgM3: number;
   /** Stoichiometric air-fuel ratio by mass. */
   stoichAfr: number;
