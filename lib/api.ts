@@ -1,8 +1,6 @@
 import "server-only";
 import { NextResponse } from "next/server";
 import type { z } from "zod";
-import type { UserRole } from "@/db/schema";
-import { checkRole, type SessionUser } from "@/lib/auth/session";
 import { RequestRefusal } from "@/lib/errors";
 
 export type ApiErrorCode = "invalid_input" | "unauthenticated" | "forbidden" | "not_found" | "conflict" | "internal";
@@ -33,18 +31,6 @@ export async function readJson(request: Request): Promise<ParsedJson> {
   } catch {
     return { ok: false, response: apiError(400, "invalid_input", "(body): the request body is not valid JSON", { field: "(body)" }) };
   }
-}
-
-export type Authorized = { ok: true; user: SessionUser } | { ok: false; response: NextResponse };
-
-/** 401 for anonymous callers, 403 for the wrong role. */
-export async function authorize(roles: readonly UserRole[]): Promise<Authorized> {
-  const access = await checkRole(roles);
-  if (access.ok) return access;
-  return {
-    ok: false,
-    response: apiError(access.status, access.status === 401 ? "unauthenticated" : "forbidden", access.message),
-  };
 }
 
 /** Maps a refusal from the shared work to its JSON answer; anything else is logged and hidden. */

@@ -1,5 +1,6 @@
 import { listUsers } from "@/db/users";
-import { authorize, invalidInput, readJson, refusalResponse } from "@/lib/api";
+import { invalidInput, readJson, refusalResponse } from "@/lib/api";
+import { authorize } from "@/lib/auth/api-access";
 import { createAccount } from "@/lib/auth/accounts";
 import { createUserSchema } from "@/app/(office)/shop/users/schema";
 

@@ -18,7 +18,7 @@ export function CreateUserForm() {
     onValidate: ({ formData }) => parseWithZod(formData, { schema: createUserSchema }),
   });
   return (
-    <form {...getFormProps(form)} action={action} className="flex flex-col gap-4" noValidate>
+    <form {...getFormProps(form)} action={action} aria-label="Add a user" className="flex flex-col gap-4" noValidate>
       <FormMessage errors={form.errors} success={lastResult?.httpStatus === 200 ? lastResult.message : undefined} />
       <Field label="Name" htmlFor={fields.name.id} errors={fields.name.errors} errorId={fields.name.errorId}>
         <Input {...getInputProps(fields.name, { type: "text" })} key={fields.name.key} />

@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { authorize, invalidInput, readJson, refusalResponse } from "@/lib/api";
+import { invalidInput, readJson, refusalResponse } from "@/lib/api";
+import { authorize } from "@/lib/auth/api-access";
 import { changeAccount } from "@/lib/auth/accounts";
 
 const patchSchema = z

@@ -1,0 +1,44 @@
+import { z } from "zod";
+import { apiError, invalidInput, readJson } from "@/lib/api";
+import { areaIn2, areaMm2, tidy } from "@/lib/calc-dto";
+import { fuelProperties } from "@/lib/engineering/fuels";
+import { areaFromMassFlow, diameterForArea } from "@/lib/engineering/orifice";
+import { fromSI, toSI } from "@/lib/engineering/units";
+import { flowUnitSchema, fuelSchema, isMassFlowUnit, positiveNumber, positiveQuantity, pressureUnitSchema } from "@/lib/quantity-schema";
+
+const bodySchema = z
+  .object({
+    flow: positiveQuantity("flow.value", flowUnitSchema),
+    dP: positiveQuantity("dP.value", pressureUnitSchema),
+    cd: positiveNumber("cd").refine((v) => v <= 1, { error: "cd must not exceed 1" }),
+    fuel: fuelSchema.optional(),
+    densityKgM3: positiveNumber("densityKgM3").optional(),
+  })
+  .refine((b) => b.fuel !== undefined || b.densityKgM3 !== undefined, { error: "give fuel or densityKgM3", path: ["fuel"] });
+
+/** Orifice area that passes a fuel flow at a pressure difference: A = m / (Cd sqrt(2 rho dP)). */
+export async function POST(request: Request) {
+  const json = await readJson(request);
+  if (!json.ok) return json.response;
+  const parsed = bodySchema.safeParse(json.value);
+  if (!parsed.success) return invalidInput(parsed.error);
+  const { flow, dP, cd } = parsed.data;
+  let densityKgM3: number;
+  try {
+    densityKgM3 = parsed.data.densityKgM3 ?? fuelProperties(parsed.data.fuel!).densityKgM3;
+  } catch (error) {
+    return apiError(400, "invalid_input", `fuel: ${(error as Error).message}`, { field: "fuel" });
+  }
+  const massFlowKgS = isMassFlowUnit(flow.unit)
+    ? toSI("massFlow", flow.value, flow.unit)
+    : toSI("volumeFlow", flow.value, flow.unit) * densityKgM3;
+  const areaM2 = areaFromMassFlow({ massFlowKgS, cd, densityKgM3, deltaPPa: toSI("pressure", dP.value, dP.unit) });
+  return Response.json({
+    areaIn2: areaIn2(areaM2),
+    areaMm2: areaMm2(areaM2),
+    singleHoleDiameterIn: tidy(fromSI("length", diameterForArea(areaM2), "in")),
+    singleHoleDiameterMm: tidy(fromSI("length", diameterForArea(areaM2), "mm"), 4),
+    massFlowKgS,
+    densityKgM3,
+  });
+}

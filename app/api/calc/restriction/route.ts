@@ -1,0 +1,63 @@
+import { z } from "zod";
+import { apiError, invalidInput, readJson } from "@/lib/api";
+import { areaIn2, drillDto, tidy } from "@/lib/calc-dto";
+import { ALL_DRILLS, drillsFromLabels } from "@/lib/engineering/drills";
+import { MAX_HOLES_PER_CHANNEL, solveHoleLayout } from "@/lib/engineering/hole-layout";
+import { toSI } from "@/lib/engineering/units";
+import { nonNegativeNumber, positiveNumber } from "@/lib/quantity-schema";
+
+const bodySchema = z
+  .object({
+    targetAreaIn2: positiveNumber("targetAreaIn2").optional(),
+    targetAreaMm2: positiveNumber("targetAreaMm2").optional(),
+    maxHoles: z
+      .number({ error: "maxHoles must be a whole number from 1 to 4" })
+      .int({ error: "maxHoles must be a whole number from 1 to 4" })
+      .min(1, { error: "maxHoles must be a whole number from 1 to 4" })
+      .max(MAX_HOLES_PER_CHANNEL, { error: "maxHoles must be a whole number from 1 to 4" }),
+    drills: z.array(z.string({ error: "drills must be a list of drill labels" }), { error: "drills must be a list of drill labels" }).min(1).optional(),
+    valveAreaIn2: positiveNumber("valveAreaIn2").optional(),
+    channelLengthIn: positiveNumber("channelLengthIn").optional(),
+    minWebIn: nonNegativeNumber("minWebIn").optional(),
+    limit: z.number().int().min(1).max(2000).optional(),
+  })
+  .refine((b) => (b.targetAreaIn2 === undefined) !== (b.targetAreaMm2 === undefined), {
+    error: "give exactly one of targetAreaIn2 or targetAreaMm2",
+    path: ["targetAreaIn2"],
+  });
+
+/** Hole layouts (count x drill) for a channel restriction, best first. */
+export async function POST(request: Request) {
+  const json = await readJson(request);
+  if (!json.ok) return json.response;
+  const parsed = bodySchema.safeParse(json.value);
+  if (!parsed.success) return invalidInput(parsed.error);
+  const body = parsed.data;
+  let drills;
+  try {
+    drills = body.drills ? drillsFromLabels(body.drills) : ALL_DRILLS;
+  } catch (error) {
+    return apiError(400, "invalid_input", (error as Error).message, { field: "drills" });
+  }
+  const inches = (v: number | undefined) => (v === undefined ? undefined : toSI("length", v, "in"));
+  const candidates = solveHoleLayout({
+    targetEffectiveAreaM2: body.targetAreaIn2 !== undefined ? toSI("area", body.targetAreaIn2, "in²") : toSI("area", body.targetAreaMm2!, "mm²"),
+    drills,
+    maxHoles: body.maxHoles,
+    valveWindowAreaM2: body.valveAreaIn2 === undefined ? undefined : toSI("area", body.valveAreaIn2, "in²"),
+    channelLengthM: inches(body.channelLengthIn),
+    minWebM: inches(body.minWebIn),
+    limit: body.limit ?? 50,
+  });
+  return Response.json({
+    candidates: candidates.map((c) => ({
+      count: c.count,
+      drill: drillDto(c.drill),
+      holesAreaIn2: areaIn2(c.holesAreaM2),
+      effectiveAreaIn2: areaIn2(c.effectiveAreaM2),
+      errorPct: tidy(c.errorPct, 3),
+      fits: c.fits,
+      valveLimited: c.valveLimited,
+    })),
+  });
+}
