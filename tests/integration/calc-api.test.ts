@@ -1,0 +1,202 @@
+// The public calculator API, called as a client would, with expected figures from outside the project.
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { GET as drillsRoute } from "@/app/api/calc/drills/route";
+import { GET as tapDrillRoute } from "@/app/api/calc/tap-drill/route";
+import { POST as orificeRoute } from "@/app/api/calc/orifice/route";
+import { POST as restrictionRoute } from "@/app/api/calc/restriction/route";
+import { jsonRequest } from "./support/database";
+
+const get = (path: string) => new Request(`http://127.0.0.1${path}`);
+
+describe("GET /api/calc/drills", () => {
+  it("lists the standard series with labels, systems and both units", async () => {
+    const response = await drillsRoute(get("/api/calc/drills"));
+    expect(response.status).toBe(200);
+    const { drills } = await response.json();
+    const byLabel = new Map(drills.map((d: { label: string }) => [d.label, d]));
+    expect(byLabel.get("#43")).toEqual({ label: "#43", system: "number", inch: 0.089, mm: 2.2606 }); // ASME B94.11M: #43 = 0.0890 in; x 25.4 = 2.2606 mm
+    expect(byLabel.get("Q")).toMatchObject({ system: "letter", inch: 0.332 }); // ASME B94.11M: Q = 0.3320 in
+    expect(byLabel.get("1/8")).toMatchObject({ system: "fraction", inch: 0.125 }); // 1/8 in = 0.125 in exactly
+    expect(byLabel.get("2.50 mm")).toMatchObject({ system: "metric", mm: 2.5 });
+  });
+
+  it("filters by system and names a bad one", async () => {
+    const letters = await (await drillsRoute(get("/api/calc/drills?system=letter"))).json();
+    expect(letters.drills).toHaveLength(26); // A to Z
+    const bad = await drillsRoute(get("/api/calc/drills?system=gauge"));
+    expect(bad.status).toBe(400);
+    expect((await bad.json()).error.field).toBe("system");
+  });
+});
+
+describe("GET /api/calc/tap-drill", () => {
+  it("gives #43 for 4-40 at 75 %, with the engagement it really gives", async () => {
+    const body = await (await tapDrillRoute(get("/api/calc/tap-drill?thread=4-40&engagement=75"))).json();
+    expect(body.thread).toMatchObject({ majorIn: 0.112, pitchIn: 0.025 }); // ASME B1.1: #4 = 0.060 + 0.013 x 4 = 0.112 in, 40 tpi
+    expect(body.drill).toMatchObject({ label: "#43", system: "number", inch: 0.089 }); // handbook tap-drill table: 4-40 -> #43
+    // (0.112 - 0.089) / (1.299038 x 0.025) x 100 = 0.023 / 0.03247595 x 100 = 70.82 %
+    expect(body.engagementPct).toBeCloseTo(70.82, 1);
+  });
+
+  it("takes metric threads and answers with a metric drill", async () => {
+    const body = await (await tapDrillRoute(get("/api/calc/tap-drill?thread=M3x0.5"))).json();
+    expect(body.thread.label).toBe("M3x0.5");
+    expect(body.drill.label).toBe("2.50 mm"); // ISO 261 pitch 0.5; handbook tap drill for M3 = 2.5 mm
+  });
+
+  it("names the field for a missing or unknown thread and a bad engagement", async () => {
+    for (const [query, field] of [
+      ["", "thread"],
+      ["?thread=banana", "thread"],
+      ["?thread=4-40&engagement=0", "engagement"],
+      ["?thread=4-40&engagement=lots", "engagement"],
+    ] as const) {
+      const response = await tapDrillRoute(get(`/api/calc/tap-drill${query}`));
+      expect(response.status, query).toBe(400);
+      expect((await response.json()).error.field, query).toBe(field);
+    }
+  });
+});
+
+describe("POST /api/calc/orifice", () => {
+  it("solves A = m / (Cd sqrt(2 rho dP)) on a hand-worked case", async () => {
+    const response = await orificeRoute(
+      jsonRequest("/api/calc/orifice", "POST", { flow: { value: 10, unit: "g/s" }, dP: { value: 1, unit: "psi" }, cd: 0.61, densityKgM3: 750 }),
+    );
+    expect(response.status).toBe(200);
+    const body = await response.json();
+    // NIST SP 811: 1 psi = 6894.757 Pa. sqrt(2 x 750 x 6894.757) = 3215.919; A = 0.010 / (0.61 x 3215.919) = 5.0976e-6 m2
+    expect(body.areaMm2).toBeCloseTo(5.0976, 3);
+    expect(body.areaIn2).toBeCloseTo(5.0976 / 645.16, 6); // NIST SP 811: 1 in2 = 645.16 mm2
+    // d = sqrt(4 A / pi) = sqrt(4 x 5.0976 / 3.14159) = 2.5476 mm = 0.10030 in
+    expect(body.singleHoleDiameterIn).toBeCloseTo(0.1003, 4);
+  });
+
+  it("takes a named fuel and a volume flow", async () => {
+    const response = await orificeRoute(
+      jsonRequest("/api/calc/orifice", "POST", { flow: { value: 600, unit: "cc/min" }, dP: { value: 2, unit: "inHg" }, cd: 0.8, fuel: "E85" }),
+    );
+    expect(response.status).toBe(200);
+    expect((await response.json()).areaIn2).toBeGreaterThan(0);
+  });
+
+  it("names the field that is wrong", async () => {
+    const cases: [unknown, string][] = [
+      [{ flow: { value: 10, unit: "g/s" }, dP: { value: 1, unit: "psi" }, cd: 1.4, densityKgM3: 750 }, "cd"],
+      [{ flow: { value: 10, unit: "furlongs" }, dP: { value: 1, unit: "psi" }, cd: 0.6, densityKgM3: 750 }, "flow.unit"],
+      [{ flow: { value: -1, unit: "g/s" }, dP: { value: 1, unit: "psi" }, cd: 0.6, densityKgM3: 750 }, "flow.value"],
+      [{ flow: { value: 10, unit: "g/s" }, dP: { value: 1, unit: "psi" }, cd: 0.6 }, "fuel"],
+      [{ flow: { value: 10, unit: "g/s" }, dP: { value: 1, unit: "psi" }, cd: 0.6, fuel: "diesel" }, "fuel"],
+    ];
+    for (const [body, field] of cases) {
+      const response = await orificeRoute(jsonRequest("/api/calc/orifice", "POST", body));
+      expect(response.status, field).toBe(400);
+      expect((await response.json()).error.field, JSON.stringify(body)).toBe(field);
+    }
+  });
+});
+
+describe("POST /api/calc/restriction", () => {
+  it("finds two #52 holes for the area of two #52 holes", async () => {
+    // ASME B94.11M: #52 = 0.0635 in; 2 x pi/4 x 0.0635^2 = 0.0063338 in2
+    const response = await restrictionRoute(jsonRequest("/api/calc/restriction", "POST", { targetAreaIn2: 0.0063338, maxHoles: 4 }));
+    expect(response.status).toBe(200);
+    const { candidates } = await response.json();
+    expect(candidates[0]).toMatchObject({ count: 2, drill: { label: "#52" }, fits: true, valveLimited: false });
+    expect(Math.abs(candidates[0].errorPct)).toBeLessThan(0.01);
+  });
+
+  it("keeps to the drills listed and flags layouts that don't fit the channel", async () => {
+    const response = await restrictionRoute(
+      jsonRequest("/api/calc/restriction", "POST", {
+        targetAreaIn2: 0.02,
+        maxHoles: 4,
+        drills: ["#43", "1/16", "1/8"],
+        channelLengthIn: 0.3,
+        minWebIn: 0.03,
+      }),
+    );
+    const { candidates } = await response.json();
+    expect(new Set(candidates.map((c: { drill: { label: string } }) => c.drill.label))).toEqual(new Set(["#43", "1/16", "1/8"]));
+    // 4 x 1/8 in + 3 x 0.03 in = 0.59 in > 0.3 in: does not fit, and ranks after every layout that does.
+    const firstUnfit = candidates.findIndex((c: { fits: boolean }) => !c.fits);
+    expect(candidates.slice(firstUnfit).every((c: { fits: boolean }) => !c.fits)).toBe(true);
+    expect(candidates.find((c: { count: number; drill: { label: string } }) => c.count === 4 && c.drill.label === "1/8").fits).toBe(false);
+  });
+
+  it("says when the valve's own window limits the flow", async () => {
+    const response = await restrictionRoute(
+      jsonRequest("/api/calc/restriction", "POST", { targetAreaIn2: 0.01, maxHoles: 4, drills: ["1/8"], valveAreaIn2: 0.02 }),
+    );
+    const { candidates } = await response.json();
+    // 2 x pi/4 x 0.125^2 = 0.02454 in2 >= the 0.02 in2 window: the valve, not the holes, sets the flow.
+    expect(candidates.find((c: { count: number }) => c.count === 2).valveLimited).toBe(true);
+    expect(candidates.find((c: { count: number }) => c.count === 1).valveLimited).toBe(false);
+  });
+
+  it("names the field that is wrong", async () => {
+    const cases: [unknown, string][] = [
+      [{ maxHoles: 2 }, "targetAreaIn2"],
+      [{ targetAreaIn2: 0.01, maxHoles: 5 }, "maxHoles"],
+      [{ targetAreaIn2: 0.01, maxHoles: 2, drills: ["#43", "#99"] }, "drills"],
+      [{ targetAreaMm2: "big", maxHoles: 2 }, "targetAreaMm2"],
+    ];
+    for (const [body, field] of cases) {
+      const response = await restrictionRoute(jsonRequest("/api/calc/restriction", "POST", body));
+      expect(response.status, JSON.stringify(body)).toBe(400);
+      expect((await response.json()).error.field, JSON.stringify(body)).toBe(field);
+    }
+  });
+});
+
+describe("every calculator endpoint answers 400, never 500, to malformed input", () => {
+  const anyJson = fc.oneof(
+    fc.jsonValue(),
+    fc.record({
+      flow: fc.anything(),
+      dP: fc.anything(),
+      cd: fc.oneof(fc.double(), fc.string()),
+      fuel: fc.oneof(fc.string(), fc.anything()),
+      densityKgM3: fc.anything(),
+      targetAreaIn2: fc.oneof(fc.double(), fc.string()),
+      targetAreaMm2: fc.anything(),
+      maxHoles: fc.oneof(fc.integer(), fc.double(), fc.string()),
+      drills: fc.oneof(fc.array(fc.string()), fc.anything()),
+      valveAreaIn2: fc.anything(),
+      channelLengthIn: fc.anything(),
+      minWebIn: fc.anything(),
+    }, { requiredKeys: [] }),
+    fc.string(),
+  );
+
+  for (const [name, route] of [
+    ["orifice", orificeRoute],
+    ["restriction", restrictionRoute],
+  ] as const) {
+    it(`POST /api/calc/${name}`, async () => {
+      await fc.assert(
+        fc.asyncProperty(anyJson, async (body) => {
+          const raw = typeof body === "string" ? body : JSON.stringify(body);
+          const response = await route(jsonRequest(`/api/calc/${name}`, "POST", raw));
+          expect([200, 400]).toContain(response.status);
+          if (response.status === 400) expect((await response.json()).error.field).toBeTruthy();
+        }),
+        { numRuns: 150 },
+      );
+    });
+  }
+
+  it("GET /api/calc/tap-drill and /api/calc/drills with any query", async () => {
+    await fc.assert(
+      fc.asyncProperty(fc.dictionary(fc.constantFrom("thread", "engagement", "allowOtherSystem", "system", "x"), fc.string()), async (params) => {
+        const query = new URLSearchParams(params).toString();
+        for (const route of [tapDrillRoute, drillsRoute]) {
+          const response = await route(get(`/api/calc/any?${query}`));
+          expect([200, 400]).toContain(response.status);
+        }
+      }),
+      { numRuns: 200 },
+    );
+  });
+});
