@@ -5,9 +5,10 @@
 // swaged over the valve inlet. Straight runs are measured along the centerline between bends (tangent to
 // tangent).
 //
-// The path is drawn in the plane of the bends, starting at the end of the swage and heading rearward (+x),
-// with y downward: a positive bend angle turns the tube down, a negative one up. Its extent (how far it
-// reaches rearward and down from the valve inlet) is checked against the room the bowl needs to come off.
+// The path is drawn in the plane of the bends from the tip of the valve inlet (where the swaged part
+// ends), heading rearward (+x), with y downward: a positive bend angle turns the tube down, a negative one
+// up. Its extent (how far it reaches rearward and down from the inlet tip) is checked against the room
+// the bowl needs to come off.
 
 import { requireFinite, requireNonNegative, requirePositive } from "./checks";
 
@@ -25,7 +26,7 @@ export interface PickupTubeInput {
   swageEngagementM: number;
   /** Outside diameter, m: adds half of it to the reach; omit to check the centerline. */
   outsideDiameterM?: number | undefined;
-  /** Room the bowl leaves: how far rearward and how far down the tube may reach from the inlet, m. */
+  /** Room the bowl leaves: how far rearward and how far down the tube may reach from the inlet tip, m. */
   maxReach?: { rearwardM?: number | undefined; downwardM?: number | undefined } | undefined;
 }
 
@@ -35,9 +36,9 @@ export interface PickupTubePlan {
   straightM: number;
   arcM: number;
   swageM: number;
-  /** End of the centerline relative to the inlet: x rearward, y downward, m. */
+  /** End of the centerline relative to the inlet tip: x rearward, y downward, m. */
   end: { xM: number; yM: number };
-  /** Farthest reach of the tube rearward (x) and down (y) from the inlet, m. */
+  /** Farthest reach of the tube rearward (x) and down (y) from the inlet tip, m. */
   reach: { rearwardM: number; downwardM: number };
   /** False when the tube reaches further than maxReach allows (true when no limit was given). */
   fitsBowl: boolean;
@@ -45,9 +46,7 @@ export interface PickupTubePlan {
   exceeds: ("rearward" | "downward")[];
 }
 
-// Points sampled along each arc to find its extent; exact at the ends, and within R(1 - cos(θ/2/steps))
-// of the true extreme in between (under 0.03 % of R for a 90° bend).
-const ARC_STEPS = 64;
+const QUARTER_TURN = Math.PI / 2;
 
 export function planPickupTube(input: PickupTubeInput): PickupTubePlan {
   const swageM = requireNonNegative("swageEngagementM", input.swageEngagementM);
@@ -79,17 +78,19 @@ export function planPickupTube(input: PickupTubeInput): PickupTubePlan {
     const turn = Math.sign(angle);
     const cx = x - turn * radius * Math.sin(heading);
     const cy = y + turn * radius * Math.cos(heading);
-    for (let step = 1; step <= ARC_STEPS; step++) {
-      const h = heading + (angle * step) / ARC_STEPS;
+    const pointAt = (h: number): void => {
       const px = cx + turn * radius * Math.sin(h);
       const py = cy - turn * radius * Math.cos(h);
       maxX = Math.max(maxX, px);
       maxY = Math.max(maxY, py);
-      if (step === ARC_STEPS) {
-        x = px;
-        y = py;
-      }
-    }
+    };
+    // Along an arc, x and y are extreme at its ends or where the heading passes a multiple of 90°.
+    const start = Math.min(heading, heading + angle);
+    const end = Math.max(heading, heading + angle);
+    for (let k = Math.ceil(start / QUARTER_TURN); k * QUARTER_TURN < end; k++) pointAt(k * QUARTER_TURN);
+    x = cx + turn * radius * Math.sin(heading + angle);
+    y = cy - turn * radius * Math.cos(heading + angle);
+    pointAt(heading + angle);
     heading += angle;
   });
   const reach = { rearwardM: maxX + halfOd, downwardM: maxY + halfOd };
