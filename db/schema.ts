@@ -1,5 +1,5 @@
 import { sql } from "drizzle-orm";
-import { boolean, index, integer, jsonb, pgEnum, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-core";
+import { boolean, doublePrecision, index, integer, jsonb, pgEnum, pgTable, text, timestamp, unique, uuid } from "drizzle-orm/pg-core";
 
 export const userRole = pgEnum("user_role", ["admin", "tuner", "machinist"]);
 export type UserRole = (typeof userRole.enumValues)[number];
@@ -46,3 +46,228 @@ export const auditEvents = pgTable(
   },
   (t) => [index("audit_events_subject").on(t.subjectType, t.subjectId)],
 );
+
+// ---------------------------------------------------------------------------------------------------------
+// Jobs. Quantities are stored in SI base units with the unit in the column name; pressures are gauge
+// (relative to the atmosphere) unless the name says otherwise.
+
+export const customers = pgTable("customers", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  name: text("name").notNull(),
+  email: text("email"),
+  phone: text("phone"),
+  notes: text("notes").notNull().default(""),
+  createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+});
+export type Customer = typeof customers.$inferSelect;
+
+export const JOB_STATES = ["draft", "planned", "released", "machining", "verified", "delivered"] as const;
+export const jobState = pgEnum("job_state", JOB_STATES);
+export type JobState = (typeof JOB_STATES)[number];
+
+export const FUEL_KIND_VALUES = ["gasoline", "ethanol", "methanol", "blend", "custom"] as const;
+
+export const jobs = pgTable(
+  "jobs",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    /** Human job number, BW-0001 onwards. */
+    number: text("number").notNull().unique(),
+    customerId: uuid("customer_id")
+      .notNull()
+      .references(() => customers.id),
+    tunerId: uuid("tuner_id")
+      .notNull()
+      .references(() => users.id),
+    state: jobState("state").notNull().default("draft"),
+    carburetor: text("carburetor").notNull(),
+    displacementM3: doublePrecision("displacement_m3").notNull(),
+    fuelKind: text("fuel_kind", { enum: FUEL_KIND_VALUES }).notNull(),
+    fuelEthanolPct: doublePrecision("fuel_ethanol_pct"),
+    fuelDensityKgM3: doublePrecision("fuel_density_kg_m3"),
+    fuelStoichAfr: doublePrecision("fuel_stoich_afr"),
+    targetPowerW: doublePrecision("target_power_w"),
+    peakBoostPa: doublePrecision("peak_boost_pa").notNull(),
+    /** Lambda wanted at atmospheric pressure and at peak boost (the target mixture, linear between). */
+    targetLambdaAtmosphere: doublePrecision("target_lambda_atmosphere").notNull().default(0.88),
+    targetLambdaPeak: doublePrecision("target_lambda_peak").notNull().default(0.78),
+    intercooled: boolean("intercooled").notNull().default(false),
+    /** Measured charge temperature; when null it is estimated from the compressor and intercooler. */
+    chargeTemperatureK: doublePrecision("charge_temperature_k"),
+    ambientTemperatureK: doublePrecision("ambient_temperature_k").notNull().default(298.15),
+    compressorEfficiency: doublePrecision("compressor_efficiency").notNull().default(0.7),
+    intercoolerEffectiveness: doublePrecision("intercooler_effectiveness").notNull().default(0.7),
+    /** Solve with every standard drill instead of the shop's rack. */
+    useAllDrills: boolean("use_all_drills").notNull().default(false),
+    notes: text("notes").notNull().default(""),
+    /** Number of the newest approved revision; 0 before the first approval. */
+    currentRevision: integer("current_revision").notNull().default(0),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("jobs_state").on(t.state), index("jobs_customer").on(t.customerId), index("jobs_tuner").on(t.tunerId)],
+);
+export type Job = typeof jobs.$inferSelect;
+
+export const CARBURETOR_SIDES = ["primary", "secondary"] as const;
+export const carburetorSide = pgEnum("carburetor_side", CARBURETOR_SIDES);
+
+export const meteringBlocks = pgTable(
+  "metering_blocks",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    jobId: uuid("job_id")
+      .notNull()
+      .references(() => jobs.id, { onDelete: "cascade" }),
+    side: carburetorSide("side").notNull(),
+    mainJetDiameterM: doublePrecision("main_jet_diameter_m").notNull(),
+    mainJetCount: integer("main_jet_count").notNull().default(2),
+    /** Usable length of each power-valve channel for the row of restriction holes. */
+    channelLengthM: doublePrecision("channel_length_m"),
+    minWebM: doublePrecision("min_web_m"),
+    /** The vacuum passage to plug, measured. */
+    passageDiameterM: doublePrecision("passage_diameter_m"),
+    passageWallM: doublePrecision("passage_wall_m"),
+    passageDepthM: doublePrecision("passage_depth_m"),
+    /** Clearance grind inputs, measured with clay. */
+    valveProtrusionM: doublePrecision("valve_protrusion_m"),
+    runningClearanceM: doublePrecision("running_clearance_m"),
+    measuredGapM: doublePrecision("measured_gap_m"),
+    bossWallM: doublePrecision("boss_wall_m"),
+    /** Pickup extension (secondary): straight runs, one bend, swage engagement. */
+    tubeRunsM: jsonb("tube_runs_m").$type<number[]>(),
+    tubeBendDeg: doublePrecision("tube_bend_deg"),
+    tubeBendRadiusM: doublePrecision("tube_bend_radius_m"),
+    tubeSwageM: doublePrecision("tube_swage_m"),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [unique("metering_blocks_job_side").on(t.jobId, t.side)],
+);
+export type MeteringBlock = typeof meteringBlocks.$inferSelect;
+
+export const VALVE_KINDS = ["vacuum", "boost"] as const;
+export const ENRICHMENT_TARGET_KINDS = ["afr", "lambda", "percentMainJet", "area"] as const;
+export type EnrichmentTargetKind = (typeof ENRICHMENT_TARGET_KINDS)[number];
+
+export const enrichmentStages = pgTable("enrichment_stages", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  blockId: uuid("block_id")
+    .notNull()
+    .references(() => meteringBlocks.id, { onDelete: "cascade" }),
+  position: integer("position").notNull(),
+  valveKind: text("valve_kind", { enum: VALVE_KINDS }).notNull(),
+  /** Vacuum valve: opens when vacuum falls below this, Pa below atmosphere (positive number). */
+  vacuumRatingPa: doublePrecision("vacuum_rating_pa"),
+  /** Boost valve: opening pressure, Pa gauge. */
+  setpointPa: doublePrecision("setpoint_pa"),
+  /** The tuner's terms: AFR or lambda from -> to, percent of main-jet area, or an area in m². */
+  targetKind: text("target_kind", { enum: ENRICHMENT_TARGET_KINDS }).notNull(),
+  targetFrom: doublePrecision("target_from"),
+  targetTo: doublePrecision("target_to").notNull(),
+  /** The valve's own flow window, in series with the holes. */
+  valveWindowAreaM2: doublePrecision("valve_window_area_m2"),
+  maxHoles: integer("max_holes").notNull().default(4),
+  /** The layout the tuner picked among the solver's candidates (null: the solver's first). */
+  chosenCount: integer("chosen_count"),
+  chosenDrillLabel: text("chosen_drill_label"),
+});
+export type EnrichmentStage = typeof enrichmentStages.$inferSelect;
+
+export const REVISION_STATUSES = ["current", "superseded"] as const;
+
+/** An approved plan: an immutable snapshot of the inputs and the solved outputs. */
+export const planRevisions = pgTable(
+  "plan_revisions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    jobId: uuid("job_id")
+      .notNull()
+      .references(() => jobs.id, { onDelete: "cascade" }),
+    number: integer("number").notNull(),
+    status: text("status", { enum: REVISION_STATUSES }).notNull().default("current"),
+    snapshot: jsonb("snapshot").notNull(),
+    approvedById: uuid("approved_by_id")
+      .notNull()
+      .references(() => users.id),
+    approvedAt: timestamp("approved_at", { withTimezone: true }).notNull().defaultNow(),
+    releasedById: uuid("released_by_id").references(() => users.id),
+    releasedAt: timestamp("released_at", { withTimezone: true }),
+    supersededAt: timestamp("superseded_at", { withTimezone: true }),
+  },
+  (t) => [unique("plan_revisions_job_number").on(t.jobId, t.number)],
+);
+export type PlanRevision = typeof planRevisions.$inferSelect;
+
+/** One step of work on one block in one revision, numbered 10, 20, 30 ... in the order it is done. */
+export const operations = pgTable(
+  "operations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    revisionId: uuid("revision_id")
+      .notNull()
+      .references(() => planRevisions.id, { onDelete: "cascade" }),
+    blockId: uuid("block_id")
+      .notNull()
+      .references(() => meteringBlocks.id),
+    number: integer("number").notNull(),
+    kind: text("kind").notNull(),
+    title: text("title").notNull(),
+    instructions: text("instructions").notNull(),
+    parameters: jsonb("parameters").notNull().default(sql`'{}'::jsonb`),
+    /** What the bench must measure for this step, with plan and tolerance (empty when nothing). */
+    measurements: jsonb("measurements").notNull().default(sql`'[]'::jsonb`),
+    caution: text("caution"),
+  },
+  (t) => [unique("operations_revision_block_number").on(t.revisionId, t.blockId, t.number)],
+);
+export type Operation = typeof operations.$inferSelect;
+
+export const signOffs = pgTable("sign_offs", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  /** Unique: a step is signed once, however many phones tap it. */
+  operationId: uuid("operation_id")
+    .notNull()
+    .unique()
+    .references(() => operations.id, { onDelete: "cascade" }),
+  userId: uuid("user_id")
+    .notNull()
+    .references(() => users.id),
+  note: text("note").notNull().default(""),
+  signedAt: timestamp("signed_at", { withTimezone: true }).notNull().defaultNow(),
+});
+
+export const measurements = pgTable("measurements", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  operationId: uuid("operation_id")
+    .notNull()
+    .references(() => operations.id, { onDelete: "cascade" }),
+  /** Which of the operation's planned measurements this answers. */
+  key: text("key").notNull(),
+  valueSi: doublePrecision("value_si").notNull(),
+  passed: boolean("passed").notNull(),
+  recordedById: uuid("recorded_by_id")
+    .notNull()
+    .references(() => users.id),
+  recordedAt: timestamp("recorded_at", { withTimezone: true }).notNull().defaultNow(),
+}, (t) => [unique("measurements_operation_key").on(t.operationId, t.key)]);
+
+export const attachments = pgTable("attachments", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  blockId: uuid("block_id")
+    .notNull()
+    .references(() => meteringBlocks.id, { onDelete: "cascade" }),
+  operationId: uuid("operation_id").references(() => operations.id, { onDelete: "set null" }),
+  storageKey: text("storage_key").notNull().unique(),
+  contentType: text("content_type").notNull(),
+  byteSize: integer("byte_size").notNull(),
+  uploadedById: uuid("uploaded_by_id")
+    .notNull()
+    .references(() => users.id),
+  createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+});
+
+/** The shop's drill rack: which standard drills are on hand (by label). */
+export const stockedDrills = pgTable("stocked_drills", {
+  label: text("label").primaryKey(),
+  addedAt: timestamp("added_at", { withTimezone: true }).notNull().defaultNow(),
+});

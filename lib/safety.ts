@@ -1,6 +1,6 @@
 import type { SignalWord } from "@/components/ui/safety-note";
 
-export type HazardTopic = "grinding" | "fuel" | "pressurizedBowls" | "general";
+export type HazardTopic = "grinding" | "drilling" | "fuel" | "pressurizedBowls" | "general";
 
 export interface SafetyCaution {
   topic: HazardTopic;
@@ -18,6 +18,13 @@ export const SAFETY_CAUTIONS: Record<HazardTopic, SafetyCaution> = {
     title: "Grinding",
     text:
       "Wear eye and face protection and a respirator rated for metal dust. Keep the die grinder's guard in place and clamp the part. Keep grit out of fuel passages: wash and blow out every passage afterwards.",
+  },
+  drilling: {
+    topic: "drilling",
+    signal: "CAUTION",
+    title: "Drilling, tapping and tube work",
+    text:
+      "Wear eye protection. Clamp the block in a soft-jawed vise, never hold it by hand. Clear chips with air away from your face and out of every fuel passage.",
   },
   fuel: {
     topic: "fuel",
