@@ -1,0 +1,114 @@
+// Performance budget of the computations the planner runs while the user types.
+//
+//   npm run bench
+//
+// Each case is warmed up, then timed call by call with process.hrtime.bigint(); the median must stay within
+// its budget. Prints median and p95 per call and PASS/FAIL; exits with code 1 if any case fails.
+// To add a case, append to CASES: a name, a budget in milliseconds and a function doing one call (it may
+// return a promise, which is awaited).
+
+import { ALL_DRILLS } from "../lib/engineering/drills";
+import { solveHoleLayout } from "../lib/engineering/hole-layout";
+import { proposeStaging, type StagingModel } from "../lib/engineering/staging";
+
+interface BenchCase {
+  name: string;
+  budgetMs: number;
+  run: () => unknown;
+}
+
+// Inputs in shop units, converted with NIST SP 811 factors.
+const M_PER_IN = 0.0254;
+const PA_PER_PSI = 6894.757;
+const PA_PER_INHG = 3386.389;
+const jetArea = (inches: number) => (Math.PI / 4) * (inches * M_PER_IN) ** 2;
+
+// Demo calibration: a boosted four-barrel with a vacuum valve on the primary.
+const STAGING_MODEL: StagingModel = {
+  mainJets: { primary: { count: 2, areaM2: jetArea(0.076) }, secondary: { count: 2, areaM2: jetArea(0.086) } },
+  valves: [{ id: "vacuum", side: "primary", kind: "vacuum", ratingPa: 6.5 * PA_PER_INHG, restrictionAreaM2: 2 * jetArea(0.04) }],
+  ambient: { pressurePa: 101_325, temperatureK: 298.15 },
+  target: { atmosphereAfr: 12.8, peakBoostAfr: 11.5, peakBoostGaugePa: 12 * PA_PER_PSI },
+  charge: { kind: "compressor", efficiency: 0.7, intercoolerEffectiveness: 0.7 },
+};
+
+let holeTargetStep = 0;
+
+const CASES: BenchCase[] = [
+  {
+    name: `hole layout: ${ALL_DRILLS.length} drills x 1-4 holes, full ranking`,
+    budgetMs: 0.2,
+    run: () => {
+      // Vary the target so no call can reuse the previous one's work.
+      holeTargetStep = (holeTargetStep + 1) % 97;
+      return solveHoleLayout({
+        targetEffectiveAreaM2: (1 + holeTargetStep / 40) * 1e-6,
+        drills: ALL_DRILLS,
+        maxHoles: 4,
+        valveWindowAreaM2: jetArea(0.2),
+        channelLengthM: 0.5 * M_PER_IN,
+        minWebM: 0.03 * M_PER_IN,
+      });
+    },
+  },
+  {
+    name: "staging proposal: 3 boost valves, part + full throttle, drilled",
+    budgetMs: 20,
+    run: () =>
+      proposeStaging({
+        model: STAGING_MODEL,
+        boostValves: 3,
+        peakBoostGaugePa: 12 * PA_PER_PSI,
+        band: 0.05,
+        valveWindowAreaM2: jetArea(0.2),
+        layout: { drills: ALL_DRILLS, maxHoles: 4, channelLengthM: 0.5 * M_PER_IN, minWebM: 0.03 * M_PER_IN },
+      }),
+  },
+];
+
+const WARMUP_MS = 500;
+const MEASURE_MS = 2000;
+const MIN_SAMPLES = 30;
+const MAX_SAMPLES = 5000;
+
+async function callOnce(run: () => unknown): Promise<void> {
+  const result = run();
+  if (result instanceof Promise) await result;
+}
+
+function quantile(sorted: readonly number[], q: number): number {
+  const index = Math.min(sorted.length - 1, Math.max(0, Math.ceil(q * sorted.length) - 1));
+  return sorted[index] ?? Number.NaN;
+}
+
+async function measure(c: BenchCase): Promise<{ median: number; p95: number; samples: number }> {
+  const warmupEnd = performance.now() + WARMUP_MS;
+  while (performance.now() < warmupEnd) await callOnce(c.run);
+  const times: number[] = [];
+  const end = performance.now() + MEASURE_MS;
+  while ((times.length < MIN_SAMPLES || performance.now() < end) && times.length < MAX_SAMPLES) {
+    const start = process.hrtime.bigint();
+    await callOnce(c.run);
+    times.push(Number(process.hrtime.bigint() - start) / 1e6);
+  }
+  times.sort((a, b) => a - b);
+  return { median: quantile(times, 0.5), p95: quantile(times, 0.95), samples: times.length };
+}
+
+const format = (ms: number) => (ms < 1 ? `${(ms * 1000).toFixed(1)} µs` : `${ms.toFixed(2)} ms`);
+
+async function main(): Promise<void> {
+  let failed = false;
+  for (const c of CASES) {
+    const { median, p95, samples } = await measure(c);
+    const pass = median <= c.budgetMs;
+    if (!pass) failed = true;
+    console.log(
+      `${pass ? "PASS" : "FAIL"}  ${c.name}\n      median ${format(median)}  p95 ${format(p95)}  ` +
+        `budget ${format(c.budgetMs)} (median)  ${samples} calls`,
+    );
+  }
+  process.exitCode = failed ? 1 : 0;
+}
+
+await main();
