@@ -69,6 +69,8 @@ let rankA = new Int32Array(0);
 let rankB = new Int32Array(0);
 let drillRank = new Int32Array(0);
 const digitCounts = new Int32Array(256);
+// Which 32-bit half of a double holds its low bits in a typed-array view (platform byte order).
+const LOW_WORD = new Uint8Array(Uint32Array.of(1).buffer)[0] === 1 ? 0 : 1;
 
 function ensureCapacity(candidates: number, drillCount: number): void {
   if (drillCount > drillRank.length) drillRank = new Int32Array(Math.max(drillCount, drillRank.length * 2));
@@ -126,7 +128,7 @@ function sortByError(n: number): Int32Array {
   const words = errorWords;
   const counts = digitCounts;
   for (let pass = 0; pass < 8; pass++) {
-    const word = pass >> 2; // 0: low 32 bits, 1: high 32 bits (little-endian typed-array view)
+    const word = pass < 4 ? LOW_WORD : 1 - LOW_WORD;
     const shift = (pass & 3) << 3;
     counts.fill(0);
     for (let i = 0; i < n; i++) {

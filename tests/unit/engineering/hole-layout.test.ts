@@ -16,7 +16,6 @@ const LETTER_E = asmeDrill("E", 0.25, "letter");
 // 1/8: d = 0.003175 m, d² = 1.0080625e-5, area = 7.91730e-6 m².
 // 1/16: d = 0.0015875 m, d² = 2.52015625e-6, area = 1.97933e-6 m².
 const AREA_1_8 = 7.9173044e-6;
-const AREA_1_16 = 1.9793261e-6;
 
 describe("solveHoleLayout", () => {
   it("finds the layout that meets the target", () => {
