@@ -1,5 +1,6 @@
 import { sql } from "drizzle-orm";
-import { boolean, doublePrecision, index, integer, jsonb, pgEnum, pgTable, text, timestamp, unique, uuid } from "drizzle-orm/pg-core";
+import { JOB_STATES, type JobState } from "../lib/job-states";
+import { boolean, doublePrecision, index, integer, jsonb, pgEnum, pgSequence, pgTable, text, timestamp, unique, uuid } from "drizzle-orm/pg-core";
 
 export const userRole = pgEnum("user_role", ["admin", "tuner", "machinist"]);
 export type UserRole = (typeof userRole.enumValues)[number];
@@ -61,9 +62,11 @@ export const customers = pgTable("customers", {
 });
 export type Customer = typeof customers.$inferSelect;
 
-export const JOB_STATES = ["draft", "planned", "released", "machining", "verified", "delivered"] as const;
 export const jobState = pgEnum("job_state", JOB_STATES);
-export type JobState = (typeof JOB_STATES)[number];
+export type { JobState };
+
+/** Numbers the jobs BW-0001, BW-0002 ... without gaps from concurrent inserts colliding. */
+export const jobNumberSequence = pgSequence("job_number_seq", { startWith: 1 });
 
 export const FUEL_KIND_VALUES = ["gasoline", "ethanol", "methanol", "blend", "custom"] as const;
 

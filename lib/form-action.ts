@@ -6,30 +6,47 @@ import type { UserRole } from "@/db/schema";
 import { checkRole, type SessionUser } from "@/lib/auth/session";
 import { RequestRefusal } from "@/lib/errors";
 
-/** What every form action returns: Conform's reply plus the HTTP-like status of the outcome. */
-export type FormResult = SubmissionResult<string[]> & { httpStatus: number; message?: string };
+/**
+ * What every form action returns: Conform's reply plus the HTTP-like status of the outcome, a message for
+ * the person, and for calculators the typed result they show beside the form.
+ */
+export type FormResult<Data = never> = SubmissionResult<string[]> & { httpStatus: number; message?: string; data?: Data };
 
+/** What the work may return: a message alone (the older form), or a message and a result payload. */
+export type WorkOutcome<Data> = string | void | { message?: string; data?: Data };
 
 /**
  * The one wrapper for server actions: parse the form with its zod schema (400 with field errors),
  * load the session (401), check the role (403), then do the work. The work runs its writes in one
  * transaction inside the data layer.
+ *
+ * resetForm (default true) clears the form after success, right for forms that create something;
+ * calculators pass false so the entered values stay beside their result. A list intent (Conform's
+ * add or remove row, submitted without JavaScript) is answered with the changed form and no work.
  */
-export async function runFormAction<Schema extends z.ZodType>(
+export async function runFormAction<Schema extends z.ZodType, Data = never>(
   formData: FormData,
   options: {
     schema: Schema;
     roles: readonly UserRole[];
-    work: (value: z.output<Schema>, user: SessionUser) => Promise<string | void>;
+    resetForm?: boolean;
+    work: (value: z.output<Schema>, user: SessionUser) => Promise<WorkOutcome<Data>>;
   },
-): Promise<FormResult> {
+): Promise<FormResult<Data>> {
   const submission = parseWithZod(formData, { schema: options.schema });
-  if (submission.status !== "success") return { ...submission.reply(), httpStatus: 400 };
+  if (submission.status === "error") return { ...submission.reply(), httpStatus: 400 };
   const access = await checkRole(options.roles);
   if (!access.ok) return { ...submission.reply({ formErrors: [access.message] }), httpStatus: access.status };
+  if (submission.status !== "success") return { ...submission.reply(), httpStatus: 200 };
   try {
-    const message = await options.work(submission.value, access.user);
-    return { ...submission.reply({ resetForm: true }), httpStatus: 200, message: message ?? undefined };
+    const outcome = await options.work(submission.value, access.user);
+    const { message, data } = typeof outcome === "object" ? outcome : { message: outcome ?? undefined, data: undefined };
+    return {
+      ...submission.reply({ resetForm: options.resetForm ?? true }),
+      httpStatus: 200,
+      message: message ?? undefined,
+      ...(data === undefined ? {} : { data }),
+    };
   } catch (error) {
     if (error instanceof RequestRefusal) {
       const fieldErrors = error.field ? { [error.field]: [error.message] } : {};

@@ -40,6 +40,10 @@ export const VOLUME_FLOW_UNITS = ["cc/min", "L/h", "gal/h", "m³/s"] as const;
 export const TEMPERATURE_UNITS = ["°F", "°C", "K"] as const;
 /** "lb/gal" is pounds (mass) per US liquid gallon. */
 export const DENSITY_UNITS = ["kg/m³", "g/cc", "lb/gal"] as const;
+/** Engine displacement: litres, cubic inches, cubic centimetres. */
+export const DISPLACEMENT_UNITS = ["L", "in³", "cc", "m³"] as const;
+/** "hp" is mechanical horsepower (550 ft·lbf/s). */
+export const POWER_UNITS = ["hp", "kW", "W"] as const;
 
 export type LengthUnit = (typeof LENGTH_UNITS)[number];
 export type AreaUnit = (typeof AREA_UNITS)[number];
@@ -48,6 +52,8 @@ export type MassFlowUnit = (typeof MASS_FLOW_UNITS)[number];
 export type VolumeFlowUnit = (typeof VOLUME_FLOW_UNITS)[number];
 export type TemperatureUnit = (typeof TEMPERATURE_UNITS)[number];
 export type DensityUnit = (typeof DENSITY_UNITS)[number];
+export type DisplacementUnit = (typeof DISPLACEMENT_UNITS)[number];
+export type PowerUnit = (typeof POWER_UNITS)[number];
 
 /** The unit names each quantity kind accepts. */
 export interface UnitsByKind {
@@ -58,6 +64,8 @@ export interface UnitsByKind {
   volumeFlow: VolumeFlowUnit;
   temperature: TemperatureUnit;
   density: DensityUnit;
+  displacement: DisplacementUnit;
+  power: PowerUnit;
 }
 
 export type QuantityKind = keyof UnitsByKind;
@@ -70,6 +78,8 @@ export const UNITS_BY_KIND: { readonly [K in QuantityKind]: readonly UnitsByKind
   volumeFlow: VOLUME_FLOW_UNITS,
   temperature: TEMPERATURE_UNITS,
   density: DENSITY_UNITS,
+  displacement: DISPLACEMENT_UNITS,
+  power: POWER_UNITS,
 };
 
 /** The SI unit every value of a kind is held in inside lib/engineering. */
@@ -81,6 +91,8 @@ export const SI_UNIT: { readonly [K in QuantityKind]: UnitsByKind[K] } = {
   volumeFlow: "m³/s",
   temperature: "K",
   density: "kg/m³",
+  displacement: "m³",
+  power: "W",
 };
 
 // Our unit names -> mathjs unit expressions.
@@ -92,6 +104,8 @@ const MATHJS_UNIT: { readonly [K in QuantityKind]: Readonly<Record<UnitsByKind[K
   volumeFlow: { "cc/min": "cc/min", "L/h": "L/h", "gal/h": "gal/h", "m³/s": "m^3/s" },
   temperature: { "°F": "degF", "°C": "degC", K: "K" },
   density: { "kg/m³": "kg/m^3", "g/cc": "g/cc", "lb/gal": "lbm/gal" },
+  displacement: { L: "L", "in³": "in^3", cc: "cc", "m³": "m^3" },
+  power: { hp: "hp", kW: "kW", W: "W" },
 };
 
 const MATHJS_SI: { readonly [K in QuantityKind]: string } = {
@@ -102,6 +116,8 @@ const MATHJS_SI: { readonly [K in QuantityKind]: string } = {
   volumeFlow: "m^3/s",
   temperature: "K",
   density: "kg/m^3",
+  displacement: "m^3",
+  power: "W",
 };
 
 function mathjsUnit<K extends QuantityKind>(kind: K, unit: UnitsByKind[K]): string {

@@ -177,3 +177,15 @@ describe("pressures with a reference", () => {
     expect(typeof bare).toBe("function");
   });
 });
+
+describe("displacement and power", () => {
+  it("converts cubic inches and horsepower by their definitions", () => {
+    // NIST SP 811 B.8: 1 in³ = 1.638 706 4 E-05 m³ (exact, from 1 in = 0.0254 m)
+    expect(toSI("displacement", 1, "in³")).toBeCloseTo(1.6387064e-5, 12);
+    // 350 in³ = 5.735 L (350 x 16.387064 cm³ = 5735.47 cm³)
+    expect(fromSI("displacement", toSI("displacement", 350, "in³"), "L")).toBeCloseTo(5.73547, 4);
+    // NIST SP 811 B.8: 1 hp (550 ft·lbf/s) = 745.699 87 W
+    expect(toSI("power", 1, "hp")).toBeCloseTo(745.69987, 4);
+    expect(toSI("power", 2.5, "kW")).toBe(2500);
+  });
+});

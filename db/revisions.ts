@@ -1,0 +1,137 @@
+import "server-only";
+import { and, asc, count, eq, inArray } from "drizzle-orm";
+import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
+import { canMove, type JobState } from "@/lib/job-states";
+import { planJob } from "@/lib/job-plan";
+import { RequestRefusal } from "@/lib/errors";
+import { recordAudit } from "./audit";
+import { getDb, type Executor } from "./client";
+import { listStockedDrills } from "./drill-stock";
+import { lockJob, type BlockRow, type Viewer } from "./jobs";
+import { enrichmentStages, jobs, measurements, meteringBlocks, operations, planRevisions, signOffs } from "./schema";
+
+/** What an approved revision keeps forever: the inputs as they were, and the plan solved from them. */
+export interface RevisionSnapshot {
+  job: Record<string, unknown>;
+  blocks: BlockRow[];
+  plan: ConversionPlan;
+}
+
+async function loadBlocks(db: Executor, jobId: string): Promise<BlockRow[]> {
+  const blocks = await db.select().from(meteringBlocks).where(eq(meteringBlocks.jobId, jobId)).orderBy(asc(meteringBlocks.side));
+  if (!blocks.length) return [];
+  const stages = await db
+    .select()
+    .from(enrichmentStages)
+    .where(inArray(enrichmentStages.blockId, blocks.map((b) => b.id)))
+    .orderBy(asc(enrichmentStages.position));
+  return blocks.map((b) => ({ ...b, stages: stages.filter((s) => s.blockId === b.id) }));
+}
+
+/** The plan of the job's working inputs, solved now with the shop's current rack. */
+export async function solveJob(jobId: string): Promise<ConversionPlan> {
+  const db = getDb();
+  const [job] = await db.select().from(jobs).where(eq(jobs.id, jobId));
+  if (!job) throw new RequestRefusal(404, "No such job.");
+  return planJob(job, await loadBlocks(db, jobId), await listStockedDrills());
+}
+
+/**
+ * Approves the working inputs as the next revision: solves them, keeps the snapshot, writes each block's
+ * operations, marks the previous revision superseded and moves the job to planned. All or nothing.
+ */
+export async function approveRevision(actor: Viewer, jobId: string): Promise<{ revision: number }> {
+  const stocked = await listStockedDrills();
+  return getDb().transaction(async (tx) => {
+    const job = await lockJob(tx, jobId);
+    if (!canMove(job.state, "planned")) throw new RequestRefusal(409, `A ${job.state} job cannot be approved: edit it first.`, "to");
+    const blocks = await loadBlocks(tx, jobId);
+    const plan = planJob(job, blocks, stocked);
+    const number = job.currentRevision + 1;
+    const now = new Date();
+    await tx
+      .update(planRevisions)
+      .set({ status: "superseded", supersededAt: now })
+      .where(and(eq(planRevisions.jobId, jobId), eq(planRevisions.status, "current")));
+    const snapshot: RevisionSnapshot = { job: { ...job }, blocks, plan };
+    const [revision] = await tx
+      .insert(planRevisions)
+      .values({ jobId, number, snapshot: JSON.parse(JSON.stringify(snapshot)), approvedById: actor.id, approvedAt: now })
+      .returning({ id: planRevisions.id });
+    const rows = plan.blocks.flatMap((blockPlan) =>
+      blockPlan.operations.map((op) => ({
+        revisionId: revision!.id,
+        blockId: blockPlan.blockId,
+        number: op.number,
+        kind: op.kind,
+        title: op.title,
+        instructions: op.instructions,
+        parameters: { ...op.parameters, ...(op.stageId ? { stageId: op.stageId } : {}) },
+        measurements: op.measurements,
+        caution: op.caution,
+      })),
+    );
+    if (rows.length) await tx.insert(operations).values(rows);
+    await tx.update(jobs).set({ state: "planned", currentRevision: number, updatedAt: now }).where(eq(jobs.id, jobId));
+    await recordAudit(tx, actor.id, "job.approve", jobId, { revision: number });
+    return { revision: number };
+  });
+}
+
+/** Whether every operation of the current revision is signed and every measurement passed. */
+export async function currentRevisionComplete(db: Executor, jobId: string, revision: number): Promise<{ complete: boolean; failed: number }> {
+  const [rev] = await db
+    .select({ id: planRevisions.id })
+    .from(planRevisions)
+    .where(and(eq(planRevisions.jobId, jobId), eq(planRevisions.number, revision)));
+  if (!rev) return { complete: false, failed: 0 };
+  const [ops] = await db.select({ n: count() }).from(operations).where(eq(operations.revisionId, rev.id));
+  const [signed] = await db
+    .select({ n: count() })
+    .from(signOffs)
+    .innerJoin(operations, eq(operations.id, signOffs.operationId))
+    .where(eq(operations.revisionId, rev.id));
+  const [failed] = await db
+    .select({ n: count() })
+    .from(measurements)
+    .innerJoin(operations, eq(operations.id, measurements.operationId))
+    .where(and(eq(operations.revisionId, rev.id), eq(measurements.passed, false)));
+  return { complete: (ops?.n ?? 0) > 0 && ops?.n === signed?.n && (failed?.n ?? 0) === 0, failed: failed?.n ?? 0 };
+}
+
+/**
+ * Moves the job to another state when the move is allowed: planned -> released stamps the revision's
+ * release; draft -> planned approves a revision; verified needs a complete bench record.
+ */
+export async function changeJobState(actor: Viewer, jobId: string, to: JobState): Promise<{ state: JobState; revision: number }> {
+  if (to === "planned") {
+    const { revision } = await approveRevision(actor, jobId);
+    return { state: "planned", revision };
+  }
+  return getDb().transaction(async (tx) => {
+    const job = await lockJob(tx, jobId);
+    if (!canMove(job.state, to)) throw new RequestRefusal(409, `A ${job.state} job cannot move to ${to}.`, "to");
+    const now = new Date();
+    if (to === "released") {
+      await tx
+        .update(planRevisions)
+        .set({ releasedAt: now, releasedById: actor.id })
+        .where(and(eq(planRevisions.jobId, jobId), eq(planRevisions.number, job.currentRevision)));
+    }
+    if (to === "verified") {
+      const record = await currentRevisionComplete(tx, jobId, job.currentRevision);
+      if (!record.complete) throw new RequestRefusal(409, "Every operation must be signed, with every measurement within plan, before the job is verified.", "to");
+    }
+    await tx.update(jobs).set({ state: to, updatedAt: now }).where(eq(jobs.id, jobId));
+    await recordAudit(tx, actor.id, "job.state", jobId, { from: job.state, to });
+    return { state: to, revision: job.currentRevision };
+  });
+}
+
+export async function getRevisionSnapshot(jobId: string, number: number): Promise<{ id: string; status: string; snapshot: RevisionSnapshot } | undefined> {
+  const [row] = await getDb()
+    .select({ id: planRevisions.id, status: planRevisions.status, snapshot: planRevisions.snapshot })
+    .from(planRevisions)
+    .where(and(eq(planRevisions.jobId, jobId), eq(planRevisions.number, number)));
+  return row ? { ...row, snapshot: row.snapshot as RevisionSnapshot } : undefined;
+}
