@@ -1,5 +1,6 @@
 // Demo data for an invented shop. Idempotent: running it again changes nothing that exists.
-// Every name, customer and engine here is made up.
+// Every name, customer and engine here is made up. Run with `tsx --conditions=react-server` so the
+// server-only data layer can be used as it is.
 import bcrypt from "bcryptjs";
 import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
 import path from "node:path";
@@ -14,7 +15,8 @@ export const DEMO_USERS = [
   { email: "machinist@blockwright.test", name: "Theo Varga", role: "machinist" },
 ] as const;
 
-export async function seedDemo(db: NodePgDatabase<typeof schema>): Promise<void> {
+/** The three demo accounts; tests start from these too. */
+export async function seedDemoUsers(db: NodePgDatabase<typeof schema>): Promise<void> {
   const passwordHash = await bcrypt.hash(DEMO_PASSWORD, 10);
   for (const user of DEMO_USERS) {
     await db
@@ -29,9 +31,13 @@ if (process.argv[1] && path.resolve(process.argv[1]) === path.resolve(import.met
   if (!url) throw new Error("DATABASE_URL is not set");
   const pool = new Pool({ connectionString: url, max: 1 });
   try {
-    await seedDemo(drizzle(pool, { schema }));
-    console.log("[blockwright] demo data seeded");
+    await seedDemoUsers(drizzle(pool, { schema }));
   } finally {
     await pool.end();
   }
+  const { seedDemoShop } = await import("./seed-shop");
+  await seedDemoShop();
+  const { closeDb } = await import("./client");
+  await closeDb();
+  console.log("[blockwright] demo data seeded");
 }

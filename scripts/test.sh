@@ -32,5 +32,5 @@ log "unit and integration tests"
 DATABASE_URL="$INTEGRATION_DATABASE_URL" npx vitest run
 log "end-to-end tests"
 DATABASE_URL="$E2E_DATABASE_URL" npx tsx db/migrate.ts
-DATABASE_URL="$E2E_DATABASE_URL" npx tsx db/seed.ts
+DATABASE_URL="$E2E_DATABASE_URL" npx tsx --conditions=react-server db/seed.ts
 DATABASE_URL="$E2E_DATABASE_URL" npx playwright test

@@ -2,7 +2,7 @@ import { sql } from "drizzle-orm";
 import { drizzle } from "drizzle-orm/node-postgres";
 import { Pool } from "pg";
 import * as schema from "@/db/schema";
-import { DEMO_USERS, seedDemo } from "@/db/seed";
+import { DEMO_USERS, seedDemoUsers } from "@/db/seed";
 import { setSessionUserId } from "./session-double";
 
 const pool = new Pool({ connectionString: process.env.DATABASE_URL, max: 2 });
@@ -15,7 +15,7 @@ export async function resetDatabase(): Promise<void> {
   );
   const names = tables.rows.map((row) => `"${row.tablename}"`).join(", ");
   if (names) await testDb.execute(sql.raw(`TRUNCATE ${names} RESTART IDENTITY CASCADE`));
-  await seedDemo(testDb);
+  await seedDemoUsers(testDb);
   setSessionUserId(null);
 }
 
