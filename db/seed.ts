@@ -16,8 +16,12 @@ export const DEMO_USERS = [
 ] as const;
 
 /** The three demo accounts; tests start from these too. */
+let demoHash: Promise<string> | undefined;
+
 export async function seedDemoUsers(db: NodePgDatabase<typeof schema>): Promise<void> {
-  const passwordHash = await bcrypt.hash(DEMO_PASSWORD, 10);
+  // One hash for all three accounts, computed once per process (tests reseed often).
+  demoHash ??= bcrypt.hash(DEMO_PASSWORD, 10);
+  const passwordHash = await demoHash;
   for (const user of DEMO_USERS) {
     await db
       .insert(schema.users)

@@ -15,6 +15,7 @@ export async function resetDatabase(): Promise<void> {
   );
   const names = tables.rows.map((row) => `"${row.tablename}"`).join(", ");
   if (names) await testDb.execute(sql.raw(`TRUNCATE ${names} RESTART IDENTITY CASCADE`));
+  await testDb.execute(sql`ALTER SEQUENCE job_number_seq RESTART WITH 1`);
   await seedDemoUsers(testDb);
   setSessionUserId(null);
 }

@@ -1,0 +1,68 @@
+// Job fixtures for the integration tests, in the API's own terms ({ value, unit } quantities).
+import { createJob, saveJobBlocks, type Viewer } from "@/db/jobs";
+import { approveRevision, changeJobState } from "@/db/revisions";
+import { blockColumns, jobColumns } from "@/lib/job-input";
+import { createJobSchema, jobBlocksSchema } from "@/app/(office)/jobs/schema";
+import type { JobFields } from "@/db/jobs";
+import { actAs, type Actor } from "./database";
+
+export function jobBody(overrides: Record<string, unknown> = {}) {
+  return {
+    newCustomerName: "Wren Halloway",
+    carburetor: "Four-barrel, vacuum secondaries, blow-through hat",
+    displacement: { value: 350, unit: "in³" },
+    fuelKind: "gasoline",
+    peakBoost: { value: 8, unit: "psi" },
+    targetLambdaAtmosphere: 0.88,
+    targetLambdaPeak: 0.78,
+    intercooled: true,
+    ambientTemperature: { value: 77, unit: "°F" },
+    compressorEfficiencyPct: 70,
+    intercoolerEffectivenessPct: 70,
+    useAllDrills: true,
+    ...overrides,
+  };
+}
+
+export function blocksBody() {
+  return {
+    blocks: [
+      {
+        side: "primary",
+        mainJetDiameter: { value: 0.076, unit: "in" },
+        mainJetCount: 2,
+        channelLength: { value: 0.3, unit: "in" },
+        minWeb: { value: 0.03, unit: "in" },
+        passageDiameter: { value: 0.085, unit: "in" },
+        passageWall: { value: 0.2, unit: "in" },
+        passageDepth: { value: 0.4, unit: "in" },
+        stages: [
+          { valveKind: "vacuum", vacuumRating: { value: 6.5, unit: "inHg" }, targetKind: "percentMainJet", targetTo: 30, maxHoles: 4 },
+          { valveKind: "boost", setpoint: { value: 3, unit: "psi" }, targetKind: "afr", targetFrom: 12.5, targetTo: 11.5, maxHoles: 4 },
+        ],
+      },
+      {
+        side: "secondary",
+        mainJetDiameter: { value: 0.086, unit: "in" },
+        mainJetCount: 2,
+        stages: [{ valveKind: "boost", setpoint: { value: 7, unit: "psi" }, targetKind: "lambda", targetFrom: 0.85, targetTo: 0.78, maxHoles: 4 }],
+      },
+    ],
+  };
+}
+
+async function viewer(actor: Exclude<Actor, "anonymous">): Promise<Viewer> {
+  const id = await actAs(actor);
+  return { id: id!, role: actor };
+}
+
+/** A job with blocks, created by the tuner through the data layer, taken as far as `state`. */
+export async function makeJob(state: "draft" | "planned" | "released" = "draft", overrides: Record<string, unknown> = {}) {
+  const tuner = await viewer("tuner");
+  const { customerId, newCustomerName, tunerId, ...fields } = createJobSchema.parse(jobBody(overrides));
+  const job = await createJob(tuner, { fields: jobColumns(fields) as JobFields, customerId, newCustomerName, tunerId });
+  await saveJobBlocks(tuner, job.id, blockColumns(jobBlocksSchema.parse(blocksBody())));
+  if (state !== "draft") await approveRevision(tuner, job.id);
+  if (state === "released") await changeJobState(tuner, job.id, "released");
+  return job;
+}
