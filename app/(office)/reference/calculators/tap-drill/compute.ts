@@ -1,0 +1,87 @@
+import "server-only";
+import { drillDto, lengthPair, tidy, type DrillDto, type LengthPair } from "@/lib/calc-dto";
+import { ALL_THREADS, clearanceDrill, METRIC_THREADS, parseThread, passagePlug, tapDrill, UNIFIED_THREADS, type Thread } from "@/lib/engineering/threads";
+import { toSI } from "@/lib/engineering/units";
+import { refuseOutOfRange } from "../refusal";
+import type { PassagePlugFormInput, TapDrillInput } from "./schema";
+
+export interface ThreadDto {
+  label: string;
+  major: LengthPair;
+  pitch: LengthPair;
+  tpi: number | null;
+}
+
+function threadDto(thread: Thread): ThreadDto {
+  return {
+    label: thread.label,
+    major: lengthPair(thread.majorM),
+    pitch: lengthPair(thread.pitchM),
+    tpi: thread.system === "unified" ? Math.round(0.0254 / thread.pitchM) : null,
+  };
+}
+
+export interface TapDrillResultDto {
+  thread: ThreadDto;
+  engagementAskedPct: number;
+  /** Drill size for exactly the engagement asked. */
+  ideal: LengthPair;
+  drill: DrillDto;
+  engagementPct: number;
+  closeClearance: DrillDto;
+  freeClearance: DrillDto;
+}
+
+export function computeTapDrill(input: TapDrillInput): TapDrillResultDto {
+  const thread = parseThread(input.thread);
+  if (thread === undefined) throw new Error("the schema lets only known threads through");
+  const result = refuseOutOfRange(() => tapDrill(thread, { engagementPct: input.engagement }), "engagement");
+  return {
+    thread: threadDto(thread),
+    engagementAskedPct: input.engagement,
+    ideal: lengthPair(result.idealM),
+    drill: drillDto(result.drill),
+    engagementPct: tidy(result.engagementPct, 2),
+    closeClearance: drillDto(clearanceDrill(thread, "close")),
+    freeClearance: drillDto(clearanceDrill(thread, "free")),
+  };
+}
+
+export interface PassagePlugResultDto {
+  thread: ThreadDto;
+  drill: DrillDto;
+  tapLabel: string;
+  engagementPct: number;
+  cleansUp: boolean;
+  remainingWall: LengthPair;
+  tapDepth: LengthPair;
+  drillDepth: LengthPair;
+  setScrew: { label: string; length: LengthPair } | null;
+  warnings: string[];
+}
+
+export function computePassagePlug(input: PassagePlugFormInput): PassagePlugResultDto {
+  const length = (q: { value: number; unit: "in" | "mm" }) => toSI("length", q.value, q.unit);
+  const plug = refuseOutOfRange(() =>
+    passagePlug({
+      passageDiameterM: length(input.passage),
+      wallThicknessM: length(input.wall),
+      depthAvailableM: length(input.depth),
+      engagementPct: input.engagement,
+      minWallM: input.minWall === undefined ? undefined : length(input.minWall),
+      threads: { unified: UNIFIED_THREADS, metric: METRIC_THREADS, both: ALL_THREADS }[input.threadSystem],
+    }),
+  );
+  return {
+    thread: threadDto(plug.thread),
+    drill: drillDto(plug.drill),
+    tapLabel: plug.tapLabel,
+    engagementPct: tidy(plug.engagementPct, 2),
+    cleansUp: plug.cleansUp,
+    remainingWall: lengthPair(plug.remainingWallM),
+    tapDepth: lengthPair(plug.tapDepthM),
+    drillDepth: lengthPair(plug.drillDepthM),
+    setScrew: plug.setScrew === null ? null : { label: plug.setScrew.label, length: lengthPair(plug.setScrew.lengthM) },
+    warnings: plug.warnings,
+  };
+}

@@ -1,0 +1,33 @@
+import { z } from "zod";
+import { parseThread } from "@/lib/engineering/threads";
+import { formNumber, formQuantity, optionalFormQuantity } from "@/lib/form-schema";
+import { FORM_LENGTH_UNITS } from "@/lib/form-units";
+
+const engagement = formNumber("thread engagement", { min: 0, max: 100 });
+
+/** Tap drill for a thread at a chosen engagement. */
+export const tapDrillSchema = z.object({
+  thread: z
+    .string({ error: "Enter a thread, such as 4-40 or M3x0.5." })
+    .trim()
+    .max(40, { error: "Enter a thread, such as 4-40 or M3x0.5." })
+    .refine((text) => parseThread(text) !== undefined, {
+      error: "Not a thread in the chart: use a Unified size from #0 to 1/2 in (4-40, 1/4-20) or ISO M1.6 to M12 (M3x0.5).",
+    }),
+  engagement,
+});
+
+export const PLUG_THREAD_SYSTEMS = ["unified", "metric", "both"] as const;
+
+/** The plug for a measured passage. */
+export const passagePlugSchema = z.object({
+  threadSystem: z.enum(PLUG_THREAD_SYSTEMS, { error: "Choose the threads the shop taps." }),
+  passage: formQuantity("passage diameter", FORM_LENGTH_UNITS),
+  wall: formQuantity("wall thickness", FORM_LENGTH_UNITS, { min: 0, minInclusive: true }),
+  depth: formQuantity("depth available", FORM_LENGTH_UNITS),
+  engagement,
+  minWall: optionalFormQuantity("least wall to keep", FORM_LENGTH_UNITS, { min: 0, minInclusive: true }),
+});
+
+export type TapDrillInput = z.output<typeof tapDrillSchema>;
+export type PassagePlugFormInput = z.output<typeof passagePlugSchema>;
