@@ -1,8 +1,8 @@
 import "server-only";
-import { asc, eq } from "drizzle-orm";
+import { asc, count, eq, ilike, or } from "drizzle-orm";
 import { recordAudit } from "./audit";
 import { getDb, type Executor } from "./client";
-import { customers } from "./schema";
+import { customers, jobs } from "./schema";
 
 export interface CustomerSummary {
   id: string;
@@ -16,6 +16,22 @@ const columns = { id: customers.id, name: customers.name, email: customers.email
 
 export async function listCustomers(): Promise<CustomerSummary[]> {
   return getDb().select(columns).from(customers).orderBy(asc(customers.name));
+}
+
+export interface CustomerWithJobs extends CustomerSummary {
+  jobCount: number;
+}
+
+/** Customers by name with how many jobs each has; `q` matches name, e-mail or phone. */
+export async function listCustomersWithJobCounts(q?: string): Promise<CustomerWithJobs[]> {
+  const pattern = q ? `%${q.replace(/[%_\\]/g, (c) => `\\${c}`)}%` : undefined;
+  return getDb()
+    .select({ ...columns, jobCount: count(jobs.id) })
+    .from(customers)
+    .leftJoin(jobs, eq(jobs.customerId, customers.id))
+    .where(pattern ? or(ilike(customers.name, pattern), ilike(customers.email, pattern), ilike(customers.phone, pattern)) : undefined)
+    .groupBy(customers.id)
+    .orderBy(asc(customers.name));
 }
 
 export async function getCustomer(id: string): Promise<CustomerSummary | undefined> {

@@ -1,7 +1,7 @@
 import "server-only";
-import { eq } from "drizzle-orm";
+import { eq, inArray } from "drizzle-orm";
 import { ALL_DRILLS } from "@/lib/engineering/drills";
-import type { Drill } from "@/lib/engineering/types";
+import type { Drill, DrillSystem } from "@/lib/engineering/types";
 import { recordAudit } from "./audit";
 import { getDb } from "./client";
 import { stockedDrills } from "./schema";
@@ -23,4 +23,15 @@ export async function setDrillStocked(actorId: string, label: string, stocked: b
     else await tx.delete(stockedDrills).where(eq(stockedDrills.label, label));
     await recordAudit(tx, actorId, stocked ? "drill.stock" : "drill.unstock", label, {}, "drill");
   });
+}
+
+/** Puts every drill of one series on the rack, or takes them all off, in one transaction. */
+export async function setSystemStocked(actorId: string, system: DrillSystem, stocked: boolean): Promise<number> {
+  const labels = ALL_DRILLS.filter((d) => d.system === system).map((d) => d.label);
+  await getDb().transaction(async (tx) => {
+    if (stocked) await tx.insert(stockedDrills).values(labels.map((label) => ({ label }))).onConflictDoNothing();
+    else await tx.delete(stockedDrills).where(inArray(stockedDrills.label, labels));
+    await recordAudit(tx, actorId, stocked ? "drill.stock-system" : "drill.unstock-system", system, { count: labels.length }, "drill");
+  });
+  return labels.length;
 }

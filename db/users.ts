@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, count, eq } from "drizzle-orm";
+import { and, asc, count, eq, inArray } from "drizzle-orm";
 import { getDb, type Executor } from "./client";
 import { recordAudit } from "./audit";
 import { users, type UserRole } from "./schema";
@@ -53,6 +53,15 @@ export async function listActiveUsersByRole(role: UserRole): Promise<UserSummary
     .select(summaryColumns)
     .from(users)
     .where(and(eq(users.role, role), eq(users.active, true)))
+    .orderBy(asc(users.name));
+}
+
+/** People who may hold a job as its tuner (tuners and admins); `activeOnly` for new assignments. */
+export async function listTuners(options: { activeOnly: boolean }): Promise<{ id: string; name: string }[]> {
+  return getDb()
+    .select({ id: users.id, name: users.name })
+    .from(users)
+    .where(and(inArray(users.role, ["tuner", "admin"]), options.activeOnly ? eq(users.active, true) : undefined))
     .orderBy(asc(users.name));
 }
 
