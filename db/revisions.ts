@@ -78,13 +78,17 @@ export async function approveRevision(actor: Viewer, jobId: string): Promise<{ r
   });
 }
 
-/** Whether every operation of the current revision is signed and every measurement passed. */
-export async function currentRevisionComplete(db: Executor, jobId: string, revision: number): Promise<{ complete: boolean; failed: number }> {
+/** Whether every operation of the revision is signed, and whether every measurement passed too. */
+export async function currentRevisionComplete(
+  db: Executor,
+  jobId: string,
+  revision: number,
+): Promise<{ complete: boolean; allSigned: boolean; failed: number }> {
   const [rev] = await db
     .select({ id: planRevisions.id })
     .from(planRevisions)
     .where(and(eq(planRevisions.jobId, jobId), eq(planRevisions.number, revision)));
-  if (!rev) return { complete: false, failed: 0 };
+  if (!rev) return { complete: false, allSigned: false, failed: 0 };
   const [ops] = await db.select({ n: count() }).from(operations).where(eq(operations.revisionId, rev.id));
   const [signed] = await db
     .select({ n: count() })
@@ -96,7 +100,8 @@ export async function currentRevisionComplete(db: Executor, jobId: string, revis
     .from(measurements)
     .innerJoin(operations, eq(operations.id, measurements.operationId))
     .where(and(eq(operations.revisionId, rev.id), eq(measurements.passed, false)));
-  return { complete: (ops?.n ?? 0) > 0 && ops?.n === signed?.n && (failed?.n ?? 0) === 0, failed: failed?.n ?? 0 };
+  const allSigned = (ops?.n ?? 0) > 0 && ops?.n === signed?.n;
+  return { complete: allSigned && (failed?.n ?? 0) === 0, allSigned, failed: failed?.n ?? 0 };
 }
 
 /**

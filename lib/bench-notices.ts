@@ -1,0 +1,71 @@
+import "server-only";
+import { getBenchView, type SignOffOutcome } from "@/db/bench";
+import { getDb } from "@/db/client";
+import { eq } from "drizzle-orm";
+import { jobs, meteringBlocks, users } from "@/db/schema";
+import { sendMailSafely } from "./mail";
+import { formatMeasurement, formatRange } from "./measurement-format";
+import { getEnv } from "./env";
+
+// Messages that keep the tuner in step with the bench: a measurement outside plan, and the job done.
+
+async function tunerOf(jobId: string) {
+  const [row] = await getDb()
+    .select({ email: users.email, name: users.name, number: jobs.number })
+    .from(jobs)
+    .innerJoin(users, eq(users.id, jobs.tunerId))
+    .where(eq(jobs.id, jobId));
+  return row;
+}
+
+/** The measured-vs-planned record of every block of the job's current revision, as plain text. */
+export async function benchSummary(jobId: string): Promise<string> {
+  const blocks = await getDb().select({ id: meteringBlocks.id }).from(meteringBlocks).where(eq(meteringBlocks.jobId, jobId));
+  const lines: string[] = [];
+  for (const block of blocks) {
+    const view = await getBenchView({ id: "", role: "admin" }, block.id);
+    if (!view) continue;
+    lines.push(`${view.block.side.toUpperCase()} BLOCK (revision ${view.revision.number})`);
+    for (const op of view.operations) {
+      lines.push(`  ${op.number}  ${op.title}: ${op.signOff ? `signed by ${op.signOff.by}` : "NOT SIGNED"}`);
+      for (const planned of op.planned) {
+        const measured = op.recorded.find((r) => r.key === planned.key);
+        lines.push(
+          `      ${planned.label}: planned ${formatMeasurement(planned.quantity, planned.plannedSi)}, measured ${
+            measured ? formatMeasurement(planned.quantity, measured.valueSi) : "-"
+          } ${measured ? (measured.passed ? "OK" : "OUTSIDE " + formatRange(planned)) : ""}`.trimEnd(),
+        );
+      }
+      if (op.signOff?.note) lines.push(`      note: ${op.signOff.note}`);
+    }
+    lines.push("");
+  }
+  return lines.join("\n");
+}
+
+export async function sendSignOffNotices(outcome: SignOffOutcome): Promise<void> {
+  if (!outcome.recorded) return;
+  const tuner = await tunerOf(outcome.jobId);
+  if (!tuner) return;
+  const link = `${getEnv().APP_BASE_URL}/jobs/${outcome.jobId}`;
+  if (outcome.failed.length) {
+    await sendMailSafely({
+      to: [tuner.email],
+      subject: `${tuner.number}: measurement outside plan at "${outcome.operationTitle}"`,
+      text: `${outcome.failed.map((f) => f.label).join(", ")} fell outside plan. The job stays in machining until it is resolved.\n\n${link}\n\n${await benchSummary(outcome.jobId)}`,
+    });
+  }
+  if (!outcome.allSigned) return;
+  const summary = await benchSummary(outcome.jobId);
+  await sendMailSafely({
+    to: [tuner.email],
+    subject: outcome.verified
+      ? `${tuner.number} is done: every operation signed and verified`
+      : `${tuner.number}: every operation signed, some measurements outside plan`,
+    text: `${
+      outcome.verified
+        ? `Every operation of ${tuner.number} is signed and every measurement is within plan.`
+        : `Every operation of ${tuner.number} is signed, but some measurements are outside plan: review the bench record.`
+    }\n\n${link}\n\nMeasured against plan:\n\n${summary}\nBlockwright's figures are planning aids checked by a qualified person; follow the manufacturer's instructions, local codes and licensed practice.`,
+  });
+}

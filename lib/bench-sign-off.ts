@@ -1,0 +1,23 @@
+import "server-only";
+import { signOffOperation, type SignOffOutcome } from "@/db/bench";
+import type { Viewer } from "@/db/jobs";
+import { toSI } from "@/lib/engineering/units";
+import type { SignOffInput } from "@/app/bench/[blockId]/schema";
+import { sendSignOffNotices } from "./bench-notices";
+import { RequestRefusal } from "./errors";
+
+const PRESSURE_UNITS = new Set(["psi", "kPa", "bar"]);
+
+/** Converts the readings to SI, signs the operation off, then tells the tuner what needs telling. */
+export async function signOffFromBench(viewer: Viewer, input: SignOffInput): Promise<SignOffOutcome> {
+  const measurements: Record<string, number> = {};
+  for (const [index, reading] of input.readings.entries()) {
+    if (reading.value < 0) throw new RequestRefusal(400, "A measured value cannot be negative.", `readings.${index}.value`);
+    measurements[reading.key] = PRESSURE_UNITS.has(reading.unit)
+      ? toSI("pressure", reading.value, reading.unit as "psi" | "kPa" | "bar")
+      : toSI("length", reading.value, reading.unit as "in" | "mm");
+  }
+  const outcome = await signOffOperation(viewer, { operationId: input.operationId, measurements, note: input.note });
+  await sendSignOffNotices(outcome);
+  return outcome;
+}

@@ -1,0 +1,35 @@
+import "server-only";
+import { randomUUID } from "node:crypto";
+import { insertAttachment } from "@/db/attachments";
+import type { Viewer } from "@/db/jobs";
+import { checkPhoto } from "./photos";
+import { deleteObject, putObject } from "./storage";
+
+/**
+ * Stores a checked photo and its thumbnail, then records them. If recording fails the stored objects are
+ * removed again, so a refused or failed upload leaves nothing behind.
+ */
+export async function storeBlockPhoto(viewer: Viewer, input: { blockId: string; operationId?: string; bytes: Buffer }) {
+  const photo = await checkPhoto(input.bytes);
+  const base = `blocks/${input.blockId}/${randomUUID()}`;
+  const storageKey = `${base}.${photo.extension}`;
+  const thumbnailKey = `${base}-thumb.jpg`;
+  await putObject(storageKey, input.bytes, photo.contentType);
+  try {
+    await putObject(thumbnailKey, photo.thumbnail, "image/jpeg");
+    return await insertAttachment(viewer, {
+      blockId: input.blockId,
+      operationId: input.operationId,
+      storageKey,
+      contentType: photo.contentType,
+      byteSize: input.bytes.length,
+    });
+  } catch (error) {
+    await Promise.allSettled([deleteObject(storageKey), deleteObject(thumbnailKey)]);
+    throw error;
+  }
+}
+
+export function thumbnailKeyOf(storageKey: string): string {
+  return storageKey.replace(/\.[a-z]+$/, "-thumb.jpg");
+}
