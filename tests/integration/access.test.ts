@@ -4,13 +4,29 @@ import { beforeEach, describe, expect, it } from "vitest";
 import { GET as listUsersRoute, POST as createUserRoute } from "@/app/api/users/route";
 import { PATCH as patchUserRoute } from "@/app/api/users/[id]/route";
 import { createUserAction, updateUserAction } from "@/app/(office)/shop/users/actions";
+import { createJobAction } from "@/app/(office)/jobs/new/actions";
+import { createCustomerAction, updateCustomerAction } from "@/app/(office)/shop/customers/actions";
+import { setDrillStockedAction, setDrillSystemStockedAction } from "@/app/(office)/shop/drills/actions";
+import { createCustomer } from "@/db/customers";
+import { settle } from "./support/redirect";
 import { GET as listJobsRoute, POST as createJobRoute } from "@/app/api/jobs/route";
 import { GET as readJobRoute, PATCH as patchJobRoute } from "@/app/api/jobs/[id]/route";
 import { POST as jobStateRoute } from "@/app/api/jobs/[id]/state/route";
+import { GET as travelerRoute } from "@/app/api/blocks/[id]/traveler/route";
+import { blockIdOf } from "./support/jobs";
+import { POST as signOffRoute } from "@/app/api/operations/[id]/sign-off/route";
+import { POST as uploadPhotoRoute } from "@/app/api/blocks/[blockId]/photos/route";
+import { GET as photoRoute } from "@/app/api/photos/[id]/route";
 import { jobBody, makeJob } from "./support/jobs";
 import { ACTORS, actAs, formData, jsonRequest, resetDatabase, testDb, type Actor } from "./support/database";
 import * as schema from "@/db/schema";
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
+import { changeStateAction, chooseLayoutAction } from "@/app/(office)/jobs/[id]/actions";
+import { updateJobAction } from "@/app/(office)/jobs/[id]/edit/actions";
+import { saveBlocksAction } from "@/app/(office)/jobs/[id]/blocks/actions";
+import { solveJob } from "@/db/revisions";
+import { nestedFormData } from "./support/form-fields";
+import { blocksBody } from "./support/jobs";
 
 async function machinistId(): Promise<string> {
   const [row] = await testDb.select({ id: schema.users.id }).from(schema.users).where(eq(schema.users.email, "machinist@blockwright.test"));
@@ -32,6 +48,42 @@ const jobParams = (id: string) => ({ params: Promise.resolve({ id }) });
 const ADMIN_ONLY = (ok: number): Record<Actor, number> => ({ anonymous: 401, machinist: 403, tuner: 403, admin: ok });
 
 const CASES: AccessCase[] = [
+  {
+    name: "POST /api/operations/{id}/sign-off (released job)",
+    expected: EVERYONE(201),
+    setup: async () => {
+      const job = await makeJob("released");
+      const [op] = await testDb
+        .select({ id: schema.operations.id })
+        .from(schema.operations)
+        .where(sql`${schema.operations.blockId} in (select id from metering_blocks where job_id = ${job.id}) and ${schema.operations.kind} = 'finish'`);
+      return op!.id;
+    },
+    call: async (id) => (await signOffRoute(jsonRequest(`/api/operations/${id}/sign-off`, "POST", { readings: [] }), jobParams(id))).status,
+  },
+  {
+    name: "POST /api/blocks/{blockId}/photos (not an image)",
+    expected: EVERYONE(400),
+    setup: async () => {
+      const job = await makeJob("released");
+      const [block] = await testDb.select({ id: schema.meteringBlocks.id }).from(schema.meteringBlocks).where(eq(schema.meteringBlocks.jobId, job.id));
+      return block!.id;
+    },
+    call: async (blockId) => {
+      const form = new FormData();
+      form.set("photo", new Blob(["not a photo"], { type: "image/png" }), "x.png");
+      const request = new Request(`http://127.0.0.1/api/blocks/${blockId}/photos`, { method: "POST", body: form });
+      return (await uploadPhotoRoute(request, { params: Promise.resolve({ blockId }) })).status;
+    },
+  },
+  {
+    name: "GET /api/photos/{id} (unknown photo)",
+    expected: EVERYONE(404),
+    call: async () => {
+      const id = "00000000-0000-4000-8000-000000000000";
+      return (await photoRoute(new Request(`http://127.0.0.1/api/photos/${id}`), jobParams(id))).status;
+    },
+  },
   {
     name: "GET /api/jobs",
     expected: EVERYONE(200),
@@ -67,6 +119,18 @@ const CASES: AccessCase[] = [
     call: async (id) => (await jobStateRoute(jsonRequest(`/api/jobs/${id}/state`, "POST", { to: "released" }), jobParams(id))).status,
   },
   {
+    name: "GET /api/blocks/{id}/traveler (released)",
+    expected: EVERYONE(200),
+    setup: async () => blockIdOf((await makeJob("released")).id),
+    call: async (id) => (await travelerRoute(new Request(`http://127.0.0.1/api/blocks/${id}/traveler`), jobParams(id))).status,
+  },
+  {
+    name: "GET /api/blocks/{id}/traveler (planned: not yet on the shop floor)",
+    expected: OFFICE_ONLY(200),
+    setup: async () => blockIdOf((await makeJob("planned")).id),
+    call: async (id) => (await travelerRoute(new Request(`http://127.0.0.1/api/blocks/${id}/traveler`), jobParams(id))).status,
+  },
+  {
     name: "GET /api/users",
     expected: ADMIN_ONLY(200),
     call: async () => (await listUsersRoute()).status,
@@ -100,6 +164,93 @@ const CASES: AccessCase[] = [
     name: "action updateUserAction",
     expected: ADMIN_ONLY(200),
     call: async () => (await updateUserAction(undefined, formData({ userId: await machinistId(), active: "false" }))).httpStatus,
+  },
+  {
+    // Success ends in a redirect to the new job's page, counted here as 303.
+    name: "action createJobAction",
+    expected: OFFICE_ONLY(303),
+    call: async () => {
+      const outcome = await settle(
+        createJobAction(
+          undefined,
+          formData({
+            newCustomerName: "Wren Halloway",
+            carburetor: "Four-barrel, vacuum secondaries",
+            "displacement.value": "5.7",
+            "displacement.unit": "L",
+            fuelKind: "gasoline",
+            "peakBoost.value": "8",
+            "peakBoost.unit": "psi",
+            targetLambdaAtmosphere: "0.88",
+            targetLambdaPeak: "0.78",
+            "ambientTemperature.value": "25",
+            "ambientTemperature.unit": "°C",
+            compressorEfficiencyPct: "70",
+            intercoolerEffectivenessPct: "70",
+          }),
+        ),
+      );
+      return outcome.redirectTo?.startsWith("/jobs/") ? 303 : outcome.result!.httpStatus;
+    },
+  },
+  {
+    name: "action createCustomerAction",
+    expected: OFFICE_ONLY(200),
+    call: async () => (await createCustomerAction(undefined, formData({ name: "Wren Halloway" }))).httpStatus,
+  },
+  {
+    name: "action updateCustomerAction",
+    expected: OFFICE_ONLY(200),
+    setup: async () => (await createCustomer(await machinistId(), { name: "Wren Halloway" })).id,
+    call: async (id) => (await updateCustomerAction(undefined, formData({ customerId: id, name: "Wren Halloway-Pike" }))).httpStatus,
+  },
+  {
+    name: "action setDrillStockedAction",
+    expected: ADMIN_ONLY(200),
+    call: async () => (await setDrillStockedAction(undefined, formData({ label: "#43", stocked: "true" }))).httpStatus,
+  },
+  {
+    name: "action setDrillSystemStockedAction",
+    expected: ADMIN_ONLY(200),
+    call: async () => (await setDrillSystemStockedAction(undefined, formData({ system: "number", stocked: "true" }))).httpStatus,
+  },
+  {
+    name: "action chooseLayoutAction",
+    expected: OFFICE_ONLY(200),
+    setup: async () => {
+      const job = await makeJob("draft");
+      return `${job.id} ${(await solveJob(job.id)).blocks[0]!.stages[0]!.stageId}`;
+    },
+    call: async (fixture) => {
+      const [jobId, stageId] = fixture.split(" ") as [string, string];
+      return (await chooseLayoutAction(jobId, undefined, formData({ stageId, count: "1", drillLabel: "#56" }))).httpStatus;
+    },
+  },
+  {
+    name: "action changeStateAction",
+    expected: OFFICE_ONLY(200),
+    setup: async () => (await makeJob("planned")).id,
+    call: async (id) => (await changeStateAction(id, undefined, formData({ to: "released" }))).httpStatus,
+  },
+  {
+    // Success ends in a redirect to the job's page, counted here as 303.
+    name: "action updateJobAction",
+    expected: OFFICE_ONLY(303),
+    setup: async () => (await makeJob("released")).id,
+    call: async (id) => {
+      const fields = nestedFormData({ ...jobBody(), newCustomerName: undefined, useAllDrills: true, intercooled: true });
+      const outcome = await settle(updateJobAction(id, undefined, fields));
+      return outcome.redirectTo === `/jobs/${id}` ? 303 : outcome.result!.httpStatus;
+    },
+  },
+  {
+    name: "action saveBlocksAction",
+    expected: OFFICE_ONLY(303),
+    setup: async () => (await makeJob("released")).id,
+    call: async (id) => {
+      const outcome = await settle(saveBlocksAction(id, undefined, nestedFormData(blocksBody())));
+      return outcome.redirectTo === `/jobs/${id}` ? 303 : outcome.result!.httpStatus;
+    },
   },
 ];
 
