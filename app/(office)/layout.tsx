@@ -3,6 +3,7 @@ import { redirect } from "next/navigation";
 import { getSessionUser } from "@/lib/auth/session";
 import { navigationFor } from "@/components/navigation";
 import { SignOutButton } from "@/components/sign-out-button";
+import { QueryProvider } from "@/components/query-provider";
 
 export default async function OfficeLayout({ children }: { children: React.ReactNode }) {
   const user = await getSessionUser();
@@ -34,7 +35,9 @@ export default async function OfficeLayout({ children }: { children: React.React
           </div>
         </div>
       </header>
-      <main className="mx-auto w-full max-w-7xl flex-1 px-6 py-8">{children}</main>
+      <main className="mx-auto w-full max-w-7xl flex-1 px-6 py-8">
+        <QueryProvider>{children}</QueryProvider>
+      </main>
       <footer className="no-print border-t border-rule px-6 py-4 text-center text-xs text-pencil">
         Blockwright figures are planning aids: a qualified person checks them. Follow the manufacturer&apos;s instructions,
         local codes and licensed practice.
