@@ -11,10 +11,28 @@ export interface NavLink {
 // The places of the app, in the order they appear. A role sees only the places it may use.
 export const PLACES: NavLink[] = [
   {
+    href: "/jobs",
+    label: "Jobs",
+    purpose: "Every job with its state, customer and tuner: find one, open it, or start a new one.",
+    roles: ["admin", "tuner", "machinist"],
+  },
+  {
     href: "/reference",
     label: "Reference",
     purpose: "Drill and tap-drill charts, and the calculators for holes, plugs, grinds, tubes and staging.",
     roles: ["admin", "tuner", "machinist"],
+  },
+  {
+    href: "/shop/customers",
+    label: "Customers",
+    purpose: "Who the work is for: contact details, notes and each customer's jobs.",
+    roles: ["admin", "tuner"],
+  },
+  {
+    href: "/shop/drills",
+    label: "Drill rack",
+    purpose: "The drills on hand, which the planner picks restriction holes from.",
+    roles: ["admin", "tuner"],
   },
   {
     href: "/shop/users",

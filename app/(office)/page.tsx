@@ -9,11 +9,11 @@ import type { UserRole } from "@/db/schema";
 const NEXT_STEP: Record<UserRole, { title: string; text: string }> = {
   admin: {
     title: "Keep the shop in order",
-    text: "Add the people who plan and machine, set their roles, and deactivate accounts that should no longer sign in.",
+    text: "Add the people who plan and machine and set their roles, keep the customer list, and keep the drill rack true to what is on hand: the planner drills only from it.",
   },
   tuner: {
     title: "Plan the next conversion",
-    text: "Size restriction holes, plug threads and grinds with the calculators, and check a staging plan against the boost range.",
+    text: "Open a new job from Jobs for the engine, fuel and boost, then size restriction holes, plug threads and grinds with the calculators.",
   },
   machinist: {
     title: "Work from the traveler",
