@@ -1,0 +1,70 @@
+import "server-only";
+import type { Job } from "@/db/schema";
+import type { DisplayLengthUnit } from "@/lib/display";
+import { FUEL_KIND_LABELS, fuelProperties } from "@/lib/engineering/fuels";
+import { fuelSpecOf } from "@/lib/job-plan";
+import { Fact, Facts } from "./facts";
+import { displacement, percent, power, psi, temperature } from "./format";
+
+export type EngineFacts = Pick<
+  Job,
+  | "carburetor"
+  | "displacementM3"
+  | "fuelKind"
+  | "fuelEthanolPct"
+  | "fuelDensityKgM3"
+  | "fuelStoichAfr"
+  | "targetPowerW"
+  | "peakBoostPa"
+  | "targetLambdaAtmosphere"
+  | "targetLambdaPeak"
+  | "intercooled"
+  | "chargeTemperatureK"
+  | "ambientTemperatureK"
+  | "compressorEfficiency"
+  | "intercoolerEffectiveness"
+  | "useAllDrills"
+  | "notes"
+>;
+
+/** Engine, fuel and boost as the tuner entered them, each figure with its unit. */
+export function EngineSummary({ job, unit }: { job: EngineFacts; unit: DisplayLengthUnit }) {
+  const fuel = fuelProperties(fuelSpecOf(job));
+  const fuelName = job.fuelKind === "blend" ? `E${job.fuelEthanolPct ?? 85}` : FUEL_KIND_LABELS[job.fuelKind];
+  const afr = (lambda: number) => (lambda * fuel.stoichAfr).toFixed(1);
+  return (
+    <Facts label="Engine and fuel">
+      <Fact label="Carburetor" plain>
+        {job.carburetor}
+      </Fact>
+      <Fact label="Displacement">{displacement(job.displacementM3)}</Fact>
+      <Fact label="Fuel" plain>
+        {fuelName}
+      </Fact>
+      <Fact label="Stoichiometric AFR">{fuel.stoichAfr.toFixed(2)} : 1</Fact>
+      <Fact label="Fuel density">{fuel.densityKgM3.toFixed(0)} kg/m³</Fact>
+      {job.targetPowerW !== null ? <Fact label="Target power">{power(job.targetPowerW)}</Fact> : null}
+      <Fact label="Peak boost">{psi(job.peakBoostPa)}</Fact>
+      <Fact label="Target at 0 psi">
+        λ {job.targetLambdaAtmosphere.toFixed(2)} · AFR {afr(job.targetLambdaAtmosphere)}
+      </Fact>
+      <Fact label="Target at peak boost">
+        λ {job.targetLambdaPeak.toFixed(2)} · AFR {afr(job.targetLambdaPeak)}
+      </Fact>
+      <Fact label="Charge temperature">
+        {job.chargeTemperatureK !== null
+          ? `${temperature(job.chargeTemperatureK, unit)} measured`
+          : `estimated: compressor ${percent(job.compressorEfficiency, 0)}${job.intercooled ? `, intercooler ${percent(job.intercoolerEffectiveness, 0)}` : ", no intercooler"}`}
+      </Fact>
+      <Fact label="Ambient">{temperature(job.ambientTemperatureK, unit)}</Fact>
+      <Fact label="Drills solved from" plain>
+        {job.useAllDrills ? "every standard drill" : "the shop's rack"}
+      </Fact>
+      {job.notes ? (
+        <Fact label="Notes" plain>
+          <span className="whitespace-pre-line">{job.notes}</span>
+        </Fact>
+      ) : null}
+    </Facts>
+  );
+}

@@ -1,0 +1,44 @@
+"use server";
+
+import { revalidatePath } from "next/cache";
+import { chooseStageLayout } from "@/db/jobs";
+import { changeJobState } from "@/db/revisions";
+import { OFFICE_ROLES } from "@/lib/auth/session";
+import { runFormAction, type FormResult } from "@/lib/form-action";
+import { JOB_STATE_LABELS } from "@/lib/job-states";
+import { jobStateChangeSchema, stageChoiceSchema } from "../schema";
+import { requireVisibleJob } from "./job-guard";
+
+// The job page's own actions: the tuner's pick among the hole layouts, and the moves between states.
+// Bound to the job's id by the page; the id is checked again here like any other input.
+
+export async function chooseLayoutAction(jobId: string, _previous: FormResult | undefined, formData: FormData): Promise<FormResult> {
+  return runFormAction(formData, {
+    schema: stageChoiceSchema,
+    roles: OFFICE_ROLES,
+    resetForm: false,
+    async work(value, user) {
+      const id = await requireVisibleJob(user, jobId);
+      await chooseStageLayout(user, { jobId: id, stageId: value.stageId, count: value.count, drillLabel: value.drillLabel });
+      revalidatePath(`/jobs/${id}`);
+      return `Stage uses ${value.count} × ${value.drillLabel}.`;
+    },
+  });
+}
+
+export async function changeStateAction(jobId: string, _previous: FormResult | undefined, formData: FormData): Promise<FormResult> {
+  return runFormAction(formData, {
+    schema: jobStateChangeSchema,
+    roles: OFFICE_ROLES,
+    resetForm: false,
+    async work(value, user) {
+      const id = await requireVisibleJob(user, jobId);
+      const moved = await changeJobState(user, id, value.to);
+      revalidatePath(`/jobs/${id}`);
+      revalidatePath("/jobs");
+      return value.to === "planned"
+        ? `Revision ${moved.revision} approved.`
+        : `The job is ${JOB_STATE_LABELS[moved.state].label}.`;
+    },
+  });
+}

@@ -1,0 +1,134 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { getJob } from "@/db/jobs";
+import { getRevisionSnapshot, solveJob } from "@/db/revisions";
+import { ALL_ROLES, OFFICE_ROLES, requireRole } from "@/lib/auth/session";
+import { RequestRefusal } from "@/lib/errors";
+import { JOB_STATE_LABELS } from "@/lib/job-states";
+import { parseIdParam } from "@/lib/route-params";
+import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
+import type { BlockRow } from "@/db/jobs";
+import type { Job } from "@/db/schema";
+import { ButtonLink } from "@/components/ui/button";
+import { PageHeader, Sheet, Tag } from "@/components/ui/sheet";
+import { BlockList } from "./_plan/block-list";
+import { EngineSummary } from "./_plan/engine-summary";
+import { PlanView } from "./_plan/plan-view";
+import { changeStateAction, chooseLayoutAction } from "./actions";
+import { RevisionsPanel } from "./revisions-panel";
+import { StateControls } from "./state-controls";
+import { officeMoves } from "./state-moves";
+
+export const metadata: Metadata = { title: "Job" };
+
+type Params = { params: Promise<{ id: string }> };
+
+interface PlanToShow {
+  job: Job;
+  plan: ConversionPlan;
+  blocks: BlockRow[];
+  source: string;
+}
+
+export default async function JobPage({ params }: Params) {
+  const { id } = await params;
+  const user = await requireRole(ALL_ROLES, `/jobs/${id}`);
+  const parsed = parseIdParam(id);
+  if (!parsed.ok) notFound();
+  const record = await getJob(user, parsed.id);
+  if (!record) notFound();
+  const { job } = record;
+  const unit = user.lengthUnit;
+  const office = OFFICE_ROLES.includes(user.role);
+
+  // A draft is solved now, with the shop's rack; past draft the bench works from the approved revision.
+  let shown: PlanToShow | undefined;
+  let refusal: string | undefined;
+  if (job.state !== "draft" && job.currentRevision > 0) {
+    const revision = await getRevisionSnapshot(job.id, job.currentRevision);
+    if (revision) shown = { job: revision.snapshot.job as unknown as Job, plan: revision.snapshot.plan, blocks: revision.snapshot.blocks, source: `As approved in revision ${job.currentRevision}.` };
+  } else if (record.blocks.length) {
+    try {
+      shown = { job, plan: await solveJob(job.id), blocks: record.blocks, source: "Working plan, solved now from the inputs and the drills available." };
+    } catch (error) {
+      if (!(error instanceof RequestRefusal)) throw error;
+      refusal = error.message;
+    }
+  }
+  const choose = office && job.state === "draft" ? chooseLayoutAction.bind(null, job.id) : undefined;
+  const moves = office ? officeMoves(job.state, job.currentRevision + 1) : [];
+
+  return (
+    <>
+      <PageHeader
+        kicker="Job"
+        title={
+          <span className="flex flex-wrap items-center gap-3">
+            <span className="numeric">{job.number}</span>
+            <span data-testid="job-state">
+              <Tag tone={job.state === "draft" ? "muted" : "accent"}>{JOB_STATE_LABELS[job.state].label}</Tag>
+            </span>
+          </span>
+        }
+        actions={
+          office ? (
+            <>
+              <ButtonLink href={`/jobs/${job.id}/edit`} variant="secondary">
+                Edit engine and fuel
+              </ButtonLink>
+              <ButtonLink href={`/jobs/${job.id}/blocks`} variant="secondary">
+                Edit blocks and stages
+              </ButtonLink>
+            </>
+          ) : undefined
+        }
+      />
+      <div className="mb-6 flex flex-wrap items-start justify-between gap-4">
+        <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
+          <dt className="text-graphite">Customer</dt>
+          <dd className="font-semibold">{record.customer.name}</dd>
+          <dt className="text-graphite">Tuner</dt>
+          <dd className="font-semibold">{record.tuner.name}</dd>
+          <dt className="text-graphite">Carburetor</dt>
+          <dd className="font-semibold">{job.carburetor}</dd>
+          <dt className="text-graphite">State</dt>
+          <dd>{JOB_STATE_LABELS[job.state].meaning}</dd>
+        </dl>
+        {moves.length ? <StateControls action={changeStateAction.bind(null, job.id)} moves={moves} /> : null}
+      </div>
+      <div className="mb-8 grid gap-6 lg:grid-cols-[1fr_28rem]">
+        <Sheet title="Engine and fuel">
+          <EngineSummary job={job} unit={unit} />
+        </Sheet>
+        <RevisionsPanel jobId={job.id} revisions={record.revisions} />
+      </div>
+      <section aria-labelledby="plan-heading" className="flex flex-col gap-4">
+        <div className="flex flex-wrap items-baseline justify-between gap-2 border-b-2 border-ink pb-2">
+          <h2 id="plan-heading" className="text-xl font-bold">
+            Plan
+          </h2>
+          {shown ? <p className="text-sm text-graphite">{shown.source}</p> : null}
+        </div>
+        {shown ? (
+          <PlanView job={shown.job} blocks={shown.blocks} plan={shown.plan} unit={unit} choose={choose} />
+        ) : record.blocks.length ? (
+          <>
+            <p role="alert" className="rounded-[var(--radius-sheet)] border border-fault bg-fault-soft px-3 py-2 text-sm text-fault">
+              {refusal ?? "The plan cannot be shown."}
+            </p>
+            <BlockList blocks={record.blocks} unit={unit} />
+          </>
+        ) : (
+          <Sheet>
+            <p className="text-sm text-graphite">No metering blocks yet: add the primary (and secondary) block with their enrichment stages to solve the plan.</p>
+            {office ? (
+              <ButtonLink href={`/jobs/${job.id}/blocks`} className="mt-3">
+                Add the metering blocks
+              </ButtonLink>
+            ) : null}
+          </Sheet>
+        )}
+      </section>
+    </>
+  );
+}

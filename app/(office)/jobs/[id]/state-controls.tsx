@@ -1,0 +1,32 @@
+"use client";
+
+import { useActionState } from "react";
+import { Button } from "@/components/ui/button";
+import { FormMessage } from "@/components/ui/field";
+import type { FormResult } from "@/lib/form-action";
+import type { JobState } from "@/lib/job-states";
+
+export interface StateMove {
+  to: JobState;
+  label: string;
+  title: string;
+  primary: boolean;
+}
+
+/** The moves the job can make from where it is, as submit buttons of one form. */
+export function StateControls({ action, moves }: { action: (previous: FormResult | undefined, formData: FormData) => Promise<FormResult>; moves: StateMove[] }) {
+  const [result, formAction, pending] = useActionState(action, undefined);
+  const refused = result && result.httpStatus !== 200 ? (result.error?.[""] ?? result.error?.to ?? ["Not done."]) : undefined;
+  return (
+    <form action={formAction} aria-label="Job state" className="flex flex-col items-end gap-2">
+      <div className="flex flex-wrap justify-end gap-2">
+        {moves.map((move) => (
+          <Button key={move.to} type="submit" name="to" value={move.to} title={move.title} variant={move.primary ? "primary" : "secondary"} disabled={pending}>
+            {move.label}
+          </Button>
+        ))}
+      </div>
+      <FormMessage errors={refused} success={result?.httpStatus === 200 ? result.message : undefined} />
+    </form>
+  );
+}

@@ -1,0 +1,19 @@
+import type { JobState } from "@/lib/job-states";
+import type { StateMove } from "./state-controls";
+
+/** The moves the office makes from the job page; the bench moves a job into and out of machining itself. */
+export function officeMoves(state: JobState, nextRevision: number): StateMove[] {
+  switch (state) {
+    case "draft":
+      return [{ to: "planned", label: `Approve as revision ${nextRevision}`, title: "Solve the plan and keep it as a revision", primary: true }];
+    case "planned":
+      return [
+        { to: "draft", label: "Reopen for edits", title: "Back to draft; the approved revision stays as it is", primary: false },
+        { to: "released", label: "Release to the bench", title: "Travelers go out; the bench may start", primary: true },
+      ];
+    case "verified":
+      return [{ to: "delivered", label: "Mark delivered", title: "Handed back to the customer", primary: true }];
+    default:
+      return [];
+  }
+}
