@@ -1,0 +1,60 @@
+"use client";
+
+import { getFormProps, useForm } from "@conform-to/react";
+import { useActionState } from "react";
+import { Button, ButtonLink } from "@/components/ui/button";
+import { FieldErrors, FormMessage } from "@/components/ui/field";
+import type { FormResult } from "@/lib/form-action";
+import type { FormLengthUnit } from "@/lib/form-units";
+import { BlockFields } from "./block-fields";
+import { newBlock, type BlocksForm } from "./form-shape";
+
+/**
+ * The primary and (optionally) secondary block of one job with their stages. Checked on the server, all or
+ * nothing; what was typed stays in the form after an error. Adding and removing rows are Conform list intents.
+ */
+export function BlocksEditor({
+  action,
+  defaultValue,
+  unit,
+  cancelHref,
+}: {
+  action: (previous: FormResult | undefined, formData: FormData) => Promise<FormResult>;
+  defaultValue: BlocksForm;
+  unit: FormLengthUnit;
+  cancelHref: string;
+}) {
+  const [lastResult, formAction, pending] = useActionState(action, undefined);
+  const [form, fields] = useForm<BlocksForm>({
+    id: "job-blocks",
+    lastResult,
+    defaultValue,
+    shouldValidate: "onSubmit",
+    shouldRevalidate: "onSubmit",
+  });
+  const blocks = fields.blocks.getFieldList();
+  const sides = blocks.map((b) => b.getFieldset().side.value);
+  const missing = sides.includes("secondary") ? "primary" : "secondary";
+  return (
+    <form {...getFormProps(form)} action={formAction} aria-label="Metering blocks" className="flex flex-col gap-6" noValidate>
+      <FormMessage errors={lastResult && lastResult.httpStatus !== 200 ? (form.errors ?? ["Check the fields marked below."]) : undefined} />
+      <FieldErrors id={fields.blocks.errorId} errors={fields.blocks.errors} />
+      {blocks.map((block, i) => (
+        <BlockFields key={block.key} form={form} block={block} listName={fields.blocks.name} index={i} removable={blocks.length > 1} unit={unit} />
+      ))}
+      <div className="flex flex-wrap items-center gap-3 border-t-2 border-ink pt-4">
+        <Button type="submit" disabled={pending}>
+          {pending ? "Saving…" : "Save blocks and stages"}
+        </Button>
+        {blocks.length < 2 ? (
+          <Button type="submit" variant="secondary" {...form.insert.getButtonProps({ name: fields.blocks.name, defaultValue: newBlock(missing, unit) })}>
+            Add the {missing} block
+          </Button>
+        ) : null}
+        <ButtonLink href={cancelHref} variant="quiet">
+          Back to the job
+        </ButtonLink>
+      </div>
+    </form>
+  );
+}

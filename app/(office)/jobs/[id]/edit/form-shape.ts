@@ -1,0 +1,39 @@
+import type { DisplacementUnit, PowerUnit, PressureUnit, TemperatureUnit } from "@/lib/engineering/units";
+
+// The engine-and-fuel form as the browser holds it, and the units each quantity offers. Type-only imports:
+// the form is checked on the server, where the unit library lives.
+
+export const DISPLACEMENT_UNITS = ["in³", "L", "cc"] as const satisfies readonly DisplacementUnit[];
+export const POWER_UNITS = ["hp", "kW"] as const satisfies readonly PowerUnit[];
+export const BOOST_UNITS = ["psi", "kPa", "bar"] as const satisfies readonly PressureUnit[];
+export const TEMPERATURE_UNITS = ["°F", "°C", "K"] as const satisfies readonly TemperatureUnit[];
+
+export const FUEL_OPTIONS = [
+  { value: "gasoline", label: "Gasoline" },
+  { value: "ethanol", label: "Ethanol (E100)" },
+  { value: "methanol", label: "Methanol" },
+  { value: "blend", label: "Ethanol blend (E85, E30 …)" },
+  { value: "custom", label: "Other: give density and stoichiometric AFR" },
+] as const;
+
+type Quantity<U extends string> = { value?: number; unit?: U };
+
+export type JobFieldsForm = {
+  carburetor?: string;
+  displacement?: Quantity<(typeof DISPLACEMENT_UNITS)[number]>;
+  fuelKind?: (typeof FUEL_OPTIONS)[number]["value"];
+  ethanolPct?: number;
+  fuelDensityKgM3?: number;
+  fuelStoichAfr?: number;
+  targetPower?: Quantity<(typeof POWER_UNITS)[number]>;
+  peakBoost?: Quantity<(typeof BOOST_UNITS)[number]>;
+  targetLambdaAtmosphere?: number;
+  targetLambdaPeak?: number;
+  intercooled?: boolean;
+  chargeTemperature?: Quantity<(typeof TEMPERATURE_UNITS)[number]>;
+  ambientTemperature?: Quantity<(typeof TEMPERATURE_UNITS)[number]>;
+  compressorEfficiencyPct?: number;
+  intercoolerEffectivenessPct?: number;
+  useAllDrills?: boolean;
+  notes?: string;
+};
