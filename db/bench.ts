@@ -132,7 +132,13 @@ export interface SignOffOutcome {
  */
 export async function signOffOperation(
   viewer: Viewer,
-  input: { operationId: string; measurements: Record<string, number>; note: string },
+  input: {
+    operationId: string;
+    measurements: Record<string, number>;
+    note: string;
+    /** What each reading's unit measured, when known: a length typed in psi is refused, not stored as metres. */
+    quantities?: Record<string, "length" | "pressure">;
+  },
 ): Promise<SignOffOutcome> {
   return getDb().transaction(async (tx) => {
     const [op] = await tx
@@ -159,6 +165,10 @@ export async function signOffOperation(
     const rows = planned.map((m) => {
       const value = input.measurements[m.key];
       if (value === undefined || !Number.isFinite(value)) throw new RequestRefusal(400, `Record ${m.label.toLowerCase()} before signing.`, `measurements.${m.key}`);
+      const measuredAs = input.quantities?.[m.key];
+      if (measuredAs && measuredAs !== m.quantity) {
+        throw new RequestRefusal(400, `${m.label} is a ${m.quantity}: choose a ${m.quantity === "length" ? "length unit (in or mm)" : "pressure unit (psi, kPa or bar)"}.`, `measurements.${m.key}`);
+      }
       const passed = value >= m.minSi - 1e-12 && value <= m.maxSi + 1e-12;
       if (!passed) failed.push({ key: m.key, label: m.label });
       return { operationId: input.operationId, key: m.key, valueSi: value, passed, recordedById: viewer.id };

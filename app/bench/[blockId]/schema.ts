@@ -7,7 +7,11 @@ export const BENCH_PRESSURE_UNITS = ["psi", "kPa", "bar"] as const;
 
 const reading = z.object({
   key: z.string().min(1).max(40),
-  value: z.coerce.number({ error: "Enter the measured value." }).refine(Number.isFinite, { error: "Enter the measured value." }),
+  // Some phone keyboards offer a decimal comma instead of the point; an empty box is a missing reading, not 0.
+  value: z.preprocess(
+    (v) => (typeof v === "string" ? v.trim().replace(",", ".") || undefined : v),
+    z.coerce.number({ error: "Enter the measured value." }).refine(Number.isFinite, { error: "Enter the measured value." }),
+  ),
   unit: z.enum([...BENCH_LENGTH_UNITS, ...BENCH_PRESSURE_UNITS], { error: "Choose the unit you measured in." }),
 });
 
