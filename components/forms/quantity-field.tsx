@@ -21,19 +21,22 @@ export function QuantityField<U extends string>({
   units,
   hint,
   optional = false,
+  hideLabel = false,
 }: {
   label: string;
   field: FieldMetadata<Quantity<U>, Record<string, unknown>, string[]>;
   units: readonly U[];
   hint?: ReactNode;
   optional?: boolean;
+  /** In a table row the column heading says what it is: the label is kept for screen readers only. */
+  hideLabel?: boolean;
 }) {
   const { value, unit } = field.getFieldset();
   const errors = joinErrors(value.errors, unit.errors, field.errors);
   const hintId = `${value.id}-hint`;
   return (
     <div className="flex flex-col gap-1">
-      <div className="flex items-baseline gap-1">
+      <div className={hideLabel ? "sr-only" : "flex items-baseline gap-1"}>
         <label htmlFor={value.id} className="text-sm font-semibold text-ink">
           {label}
         </label>

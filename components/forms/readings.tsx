@@ -38,7 +38,7 @@ export function ResultPanel({ title, children, testId }: { title: ReactNode; chi
     <section
       data-testid={testId}
       aria-live="polite"
-      className="flex flex-col gap-3 self-start rounded-[var(--radius-sheet)] border-2 border-ink bg-white px-4 py-3"
+      className="flex flex-col gap-3 rounded-[var(--radius-sheet)] border-2 border-ink bg-white px-4 py-3"
     >
       <h3 className="text-sm font-semibold uppercase tracking-wider text-graphite">{title}</h3>
       {children}

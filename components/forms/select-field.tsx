@@ -10,15 +10,17 @@ export function SelectField<V extends string>({
   field,
   options,
   hint,
+  hideLabel = false,
 }: {
   label: ReactNode;
   field: FieldMetadata<V | undefined, Record<string, unknown>, string[]>;
   options: readonly { value: V; label: string }[];
   hint?: ReactNode;
+  hideLabel?: boolean;
 }) {
   return (
     <div className="flex flex-col gap-1">
-      <label htmlFor={field.id} className="text-sm font-semibold text-ink">
+      <label htmlFor={field.id} className={hideLabel ? "sr-only" : "text-sm font-semibold text-ink"}>
         {label}
       </label>
       <Select {...getSelectProps(field)} key={field.key}>

@@ -1,4 +1,3 @@
-import "server-only";
 import { drillDto, lengthPair, tidy, type DrillDto, type LengthPair } from "@/lib/calc-dto";
 import { ALL_THREADS, clearanceDrill, tapDrill, type Thread, type ThreadSystem } from "@/lib/engineering/threads";
 

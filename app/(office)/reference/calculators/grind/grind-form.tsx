@@ -34,7 +34,7 @@ export function GrindForm({ unit }: { unit: DisplayLengthUnit }) {
     onValidate: ({ formData }) => parseWithZod(formData, { schema: grindSchema }),
   });
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,30rem)_1fr]">
+    <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,30rem)_1fr]">
       <form {...getFormProps(form)} action={action} aria-label="Clearance grind" className="flex flex-col gap-5" noValidate>
         <CalculatorMessage errors={form.errors} />
         <FieldGroup title="Measured" columns={2}>

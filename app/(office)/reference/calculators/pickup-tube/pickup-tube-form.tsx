@@ -38,7 +38,7 @@ export function PickupTubeForm({ unit }: { unit: DisplayLengthUnit }) {
     onValidate: ({ formData }) => parseWithZod(formData, { schema: pickupTubeSchema }),
   });
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,30rem)_1fr]">
+    <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,30rem)_1fr]">
       <form {...getFormProps(form)} action={action} aria-label="Pickup tube" className="flex flex-col gap-5" noValidate>
         <CalculatorMessage errors={form.errors} />
         <FieldGroup title="Path along the centerline" columns={2}>

@@ -40,7 +40,7 @@ export function PassagePlugForm({ unit }: { unit: DisplayLengthUnit }) {
     onValidate: ({ formData }) => parseWithZod(formData, { schema: passagePlugSchema }),
   });
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,30rem)_1fr]">
+    <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,30rem)_1fr]">
       <form {...getFormProps(form)} action={action} aria-label="Passage plug" className="flex flex-col gap-4" noValidate>
         <CalculatorMessage errors={form.errors} />
         <FieldGroup columns={2}>

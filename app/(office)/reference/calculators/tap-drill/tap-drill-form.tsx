@@ -25,7 +25,7 @@ export function TapDrillForm({ unit }: { unit: DisplayLengthUnit }) {
     onValidate: ({ formData }) => parseWithZod(formData, { schema: tapDrillSchema }),
   });
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,30rem)_1fr]">
+    <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,30rem)_1fr]">
       <form {...getFormProps(form)} action={action} aria-label="Tap drill" className="flex flex-col gap-4" noValidate>
         <CalculatorMessage errors={form.errors} />
         <Field label="Thread" htmlFor={fields.thread.id} errors={fields.thread.errors} errorId={fields.thread.errorId} hint="4-40, #10-32, 1/4-20 UNC, M3x0.5, M8x1">
