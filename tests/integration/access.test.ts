@@ -12,7 +12,7 @@ import { settle } from "./support/redirect";
 import { GET as listJobsRoute, POST as createJobRoute } from "@/app/api/jobs/route";
 import { GET as readJobRoute, PATCH as patchJobRoute } from "@/app/api/jobs/[id]/route";
 import { POST as jobStateRoute } from "@/app/api/jobs/[id]/state/route";
-import { GET as travelerRoute } from "@/app/api/blocks/[id]/traveler/route";
+import { GET as travelerRoute } from "@/app/api/blocks/[blockId]/traveler/route";
 import { blockIdOf } from "./support/jobs";
 import { POST as signOffRoute } from "@/app/api/operations/[id]/sign-off/route";
 import { POST as uploadPhotoRoute } from "@/app/api/blocks/[blockId]/photos/route";
@@ -26,6 +26,13 @@ import { updateJobAction } from "@/app/(office)/jobs/[id]/edit/actions";
 import { saveBlocksAction } from "@/app/(office)/jobs/[id]/blocks/actions";
 import { solveJob } from "@/db/revisions";
 import { nestedFormData } from "./support/form-fields";
+import { setLengthUnitAction } from "@/app/(office)/reference/actions";
+import { restrictionAction } from "@/app/(office)/reference/calculators/restriction/actions";
+import { passagePlugAction, tapDrillAction } from "@/app/(office)/reference/calculators/tap-drill/actions";
+import { grindPlanAction } from "@/app/(office)/reference/calculators/grind/actions";
+import { pickupTubeAction } from "@/app/(office)/reference/calculators/pickup-tube/actions";
+import { stagingAction } from "@/app/(office)/reference/calculators/staging/actions";
+import * as referenceForms from "./support/reference-forms";
 import { blocksBody } from "./support/jobs";
 
 async function machinistId(): Promise<string> {
@@ -122,13 +129,13 @@ const CASES: AccessCase[] = [
     name: "GET /api/blocks/{id}/traveler (released)",
     expected: EVERYONE(200),
     setup: async () => blockIdOf((await makeJob("released")).id),
-    call: async (id) => (await travelerRoute(new Request(`http://127.0.0.1/api/blocks/${id}/traveler`), jobParams(id))).status,
+    call: async (blockId) => (await travelerRoute(new Request(`http://127.0.0.1/api/blocks/${blockId}/traveler`), { params: Promise.resolve({ blockId }) })).status,
   },
   {
     name: "GET /api/blocks/{id}/traveler (planned: not yet on the shop floor)",
     expected: OFFICE_ONLY(200),
     setup: async () => blockIdOf((await makeJob("planned")).id),
-    call: async (id) => (await travelerRoute(new Request(`http://127.0.0.1/api/blocks/${id}/traveler`), jobParams(id))).status,
+    call: async (blockId) => (await travelerRoute(new Request(`http://127.0.0.1/api/blocks/${blockId}/traveler`), { params: Promise.resolve({ blockId }) })).status,
   },
   {
     name: "GET /api/users",
@@ -252,6 +259,27 @@ const CASES: AccessCase[] = [
       return outcome.redirectTo === `/jobs/${id}` ? 303 : outcome.result!.httpStatus;
     },
   },
+  // Reference calculators: every role may use them; they read and write nothing but the user's unit choice.
+  {
+    name: "action setLengthUnitAction",
+    expected: EVERYONE(200),
+    call: async () => (await setLengthUnitAction(undefined, formData({ lengthUnit: "mm" }))).httpStatus,
+  },
+  ...(
+    [
+      ["tapDrillAction", tapDrillAction, referenceForms.TAP_DRILL_FORM],
+      ["passagePlugAction", passagePlugAction, referenceForms.PASSAGE_PLUG_FORM],
+      ["restrictionAction", restrictionAction, referenceForms.RESTRICTION_FORM],
+      ["grindPlanAction", grindPlanAction, referenceForms.GRIND_FORM],
+      ["pickupTubeAction", pickupTubeAction, referenceForms.PICKUP_TUBE_FORM],
+      ["stagingAction (chart)", stagingAction, referenceForms.STAGING_FORM],
+      ["stagingAction (propose)", stagingAction, { ...referenceForms.STAGING_FORM, command: "propose" }],
+    ] as const
+  ).map(([name, action, form]) => ({
+    name: `action ${name}`,
+    expected: EVERYONE(200),
+    call: async () => (await action(undefined, nestedFormData(form))).httpStatus,
+  })),
 ];
 
 describe("access table: route or action x actor -> status", () => {
