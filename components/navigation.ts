@@ -40,6 +40,12 @@ export const PLACES: NavLink[] = [
     purpose: "Users and roles: who may plan, who works at the bench, who runs the shop.",
     roles: ["admin"],
   },
+  {
+    href: "/shop/outbox",
+    label: "Outbox",
+    purpose: "Every message the app sent through the local mail fake, with its text and attachments.",
+    roles: ["admin"],
+  },
 ];
 
 export function navigationFor(role: UserRole): NavLink[] {

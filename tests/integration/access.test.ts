@@ -17,6 +17,10 @@ import { blockIdOf } from "./support/jobs";
 import { POST as signOffRoute } from "@/app/api/operations/[id]/sign-off/route";
 import { POST as uploadPhotoRoute } from "@/app/api/blocks/[blockId]/photos/route";
 import { GET as photoRoute } from "@/app/api/photos/[id]/route";
+import { signOffAction } from "@/app/bench/[blockId]/actions";
+import { GET as outboxAttachmentRoute } from "@/app/api/outbox/[name]/attachments/[index]/route";
+import { outboxDir } from "@/lib/outbox";
+import { writeEml } from "./support/outbox";
 import { jobBody, makeJob } from "./support/jobs";
 import { ACTORS, actAs, formData, jsonRequest, resetDatabase, testDb, type Actor } from "./support/database";
 import * as schema from "@/db/schema";
@@ -82,6 +86,41 @@ const CASES: AccessCase[] = [
       const request = new Request(`http://127.0.0.1/api/blocks/${blockId}/photos`, { method: "POST", body: form });
       return (await uploadPhotoRoute(request, { params: Promise.resolve({ blockId }) })).status;
     },
+  },
+  {
+    name: "action signOffAction (released job)",
+    expected: EVERYONE(200),
+    setup: async () => {
+      const job = await makeJob("released");
+      const [op] = await testDb
+        .select({ id: schema.operations.id })
+        .from(schema.operations)
+        .where(sql`${schema.operations.blockId} in (select id from metering_blocks where job_id = ${job.id}) and ${schema.operations.kind} = 'finish'`);
+      return op!.id;
+    },
+    call: async (id) => (await signOffAction(undefined, formData({ operationId: id, note: "" }))).httpStatus,
+  },
+  {
+    name: "GET /api/outbox/{name}/attachments/{index}",
+    expected: ADMIN_ONLY(200),
+    setup: async () => {
+      const name = `access-${Date.now()}.eml`;
+      writeEml(outboxDir(), {
+        name,
+        date: "Tue, 02 Jun 2026 16:40:00 +0000",
+        to: "tuner@blockwright.test",
+        subject: "with an attachment",
+        text: "see attached",
+        attachment: { filename: "record.txt", contentType: "text/plain", content: Buffer.from("record") },
+      });
+      return name;
+    },
+    call: async (name) =>
+      (
+        await outboxAttachmentRoute(new Request(`http://127.0.0.1/api/outbox/${name}/attachments/0`), {
+          params: Promise.resolve({ name, index: "0" }),
+        })
+      ).status,
   },
   {
     name: "GET /api/photos/{id} (unknown photo)",
