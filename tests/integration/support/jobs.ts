@@ -4,7 +4,9 @@ import { approveRevision, changeJobState } from "@/db/revisions";
 import { blockColumns, jobColumns } from "@/lib/job-input";
 import { createJobSchema, jobBlocksSchema } from "@/app/(office)/jobs/schema";
 import type { JobFields } from "@/db/jobs";
-import { actAs, type Actor } from "./database";
+import { and, eq } from "drizzle-orm";
+import * as schema from "@/db/schema";
+import { actAs, testDb, type Actor } from "./database";
 
 export function jobBody(overrides: Record<string, unknown> = {}) {
   return {
@@ -65,4 +67,14 @@ export async function makeJob(state: "draft" | "planned" | "released" = "draft",
   if (state !== "draft") await approveRevision(tuner, job.id);
   if (state === "released") await changeJobState(tuner, job.id, "released");
   return job;
+}
+
+/** The id of the job's block on the given side. */
+export async function blockIdOf(jobId: string, side: "primary" | "secondary" = "primary"): Promise<string> {
+  const [block] = await testDb
+    .select({ id: schema.meteringBlocks.id })
+    .from(schema.meteringBlocks)
+    .where(and(eq(schema.meteringBlocks.jobId, jobId), eq(schema.meteringBlocks.side, side)));
+  if (!block) throw new Error(`job ${jobId} has no ${side} block`);
+  return block.id;
 }
