@@ -144,6 +144,21 @@ describe("signing operations off at the bench", () => {
   });
 });
 
+describe("releasing a job", () => {
+  it("sends every active machinist the block travelers of the released revision", async () => {
+    const job = await makeJob("planned");
+    await actAs("tuner");
+    const response = await stateRoute(jsonRequest(`/api/jobs/${job.id}/state`, "POST", { to: "released" }), { params: Promise.resolve({ id: job.id }) });
+    expect(response.status).toBe(200);
+    await waitForMail(1);
+    const notice = mail.messages.find((m) => m.subject?.includes("released"));
+    expect(JSON.stringify(notice?.to)).toContain("machinist@blockwright.test");
+    expect(notice?.attachments.map((a) => a.filename).sort()).toEqual([`${job.number}-primary-rev1.pdf`, `${job.number}-secondary-rev1.pdf`]);
+    expect(notice?.attachments.every((a) => a.content.subarray(0, 5).toString() === "%PDF-")).toBe(true);
+    expect(notice?.text).toContain(`/bench/`);
+  });
+});
+
 describe("photos", () => {
   const upload = (blockId: string, file: Blob, name: string) => {
     const form = new FormData();

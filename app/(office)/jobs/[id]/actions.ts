@@ -2,9 +2,9 @@
 
 import { revalidatePath } from "next/cache";
 import { chooseStageLayout } from "@/db/jobs";
-import { changeJobState } from "@/db/revisions";
 import { OFFICE_ROLES } from "@/lib/auth/session";
 import { runFormAction, type FormResult } from "@/lib/form-action";
+import { moveJob } from "@/lib/job-moves";
 import { JOB_STATE_LABELS } from "@/lib/job-states";
 import { jobStateChangeSchema, stageChoiceSchema } from "../schema";
 import { requireVisibleJob } from "./job-guard";
@@ -33,7 +33,7 @@ export async function changeStateAction(jobId: string, _previous: FormResult | u
     resetForm: false,
     async work(value, user) {
       const id = await requireVisibleJob(user, jobId);
-      const moved = await changeJobState(user, id, value.to);
+      const moved = await moveJob(user, id, value.to);
       revalidatePath(`/jobs/${id}`);
       revalidatePath("/jobs");
       return value.to === "planned"

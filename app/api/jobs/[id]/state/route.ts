@@ -1,5 +1,5 @@
 import { getJob } from "@/db/jobs";
-import { changeJobState } from "@/db/revisions";
+import { moveJob } from "@/lib/job-moves";
 import { apiError, invalidInput, readJson, refusalResponse } from "@/lib/api";
 import { authorize } from "@/lib/auth/api-access";
 import { OFFICE_ROLES } from "@/lib/auth/session";
@@ -18,7 +18,7 @@ export async function POST(request: Request, { params }: { params: Promise<{ id:
   if (!access.ok) return access.response;
   if (!(await getJob(access.user, id.id))) return apiError(404, "not_found", "No such job.");
   try {
-    return Response.json(await changeJobState(access.user, id.id, parsed.data.to));
+    return Response.json(await moveJob(access.user, id.id, parsed.data.to));
   } catch (error) {
     return refusalResponse(error);
   }

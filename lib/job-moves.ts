@@ -1,0 +1,62 @@
+import "server-only";
+import { eq } from "drizzle-orm";
+import { renderTravelerPdf } from "@/components/traveler/render-traveler";
+import { getDb } from "@/db/client";
+import type { Viewer } from "@/db/jobs";
+import { changeJobState } from "@/db/revisions";
+import { jobs, meteringBlocks } from "@/db/schema";
+import { getTravelerData } from "@/db/travelers";
+import { listActiveUsersByRole } from "@/db/users";
+import { benchUrl } from "./bench-url";
+import { getEnv } from "./env";
+import type { JobState } from "./job-states";
+import { sendMailSafely } from "./mail";
+import { ALL_CAUTIONS } from "./safety";
+
+/**
+ * Moves a job to another state (the one way pages and the API do it) and sends what the move calls for:
+ * a release sends every active machinist the block travelers of the released revision.
+ */
+export async function moveJob(actor: Viewer, jobId: string, to: JobState): Promise<{ state: JobState; revision: number }> {
+  const moved = await changeJobState(actor, jobId, to);
+  if (moved.state === "released") await sendReleaseNotice(actor, jobId, moved.revision);
+  return moved;
+}
+
+export async function sendReleaseNotice(actor: Viewer, jobId: string, revision: number): Promise<boolean> {
+  const machinists = await listActiveUsersByRole("machinist");
+  if (machinists.length === 0) return false;
+  const db = getDb();
+  const [job] = await db.select({ number: jobs.number, carburetor: jobs.carburetor }).from(jobs).where(eq(jobs.id, jobId));
+  const blocks = await db.select({ id: meteringBlocks.id, side: meteringBlocks.side }).from(meteringBlocks).where(eq(meteringBlocks.jobId, jobId));
+  const attachments = [];
+  const lines = [];
+  for (const block of blocks.sort((a, b) => a.side.localeCompare(b.side))) {
+    try {
+      const data = await getTravelerData(actor, { blockId: block.id, revision });
+      attachments.push({
+        filename: `${job!.number}-${block.side}-rev${revision}.pdf`,
+        content: await renderTravelerPdf(data, { paper: "letter" }),
+        contentType: "application/pdf",
+      });
+      lines.push(`  ${block.side} block: ${benchUrl(block.id, revision)}`);
+    } catch (error) {
+      console.error("[release] traveler for", block.side, error);
+    }
+  }
+  return sendMailSafely({
+    to: machinists.map((m) => m.email),
+    subject: `${job!.number} released: revision ${revision} travelers`,
+    text: [
+      `${job!.number} (${job!.carburetor}) is released to the bench, revision ${revision}.`,
+      "",
+      "The travelers are attached, one per metering block. Scan a traveler's QR code or open:",
+      ...lines,
+      "",
+      `Job page: ${getEnv().APP_BASE_URL}/jobs/${jobId}`,
+      "",
+      ...ALL_CAUTIONS.map((c) => `${c.signal} (${c.title}): ${c.text}`),
+    ].join("\n"),
+    attachments,
+  });
+}
