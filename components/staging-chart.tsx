@@ -55,6 +55,16 @@ function ChartTooltip({ active, payload, unit }: { active?: boolean; payload?: {
   );
 }
 
+/** Five or six round ticks across a range (steps of 1, 2 or 5 times a power of ten). */
+function niceTicks(low: number, high: number): number[] {
+  const raw = (high - low) / 8;
+  const power = Math.pow(10, Math.floor(Math.log10(raw)));
+  const step = [1, 2, 2.5, 5, 10].map((m) => m * power).find((s) => s >= raw) ?? raw;
+  const ticks: number[] = [];
+  for (let t = Math.ceil(low / step) * step; t <= high + step * 1e-9; t += step) ticks.push(Number(t.toPrecision(12)));
+  return ticks;
+}
+
 /** Where the supplied curve stands just after a valve opens: the first sweep point at or past its opening. */
 function suppliedAfter(rows: Row[], psi: number): number | undefined {
   return rows.find((r) => r.psi > psi + 1e-9)?.supplied ?? rows.at(-1)?.supplied;
@@ -148,6 +158,7 @@ export function StagingChart({ chart, mode, unit }: { chart: StagingChartDto; mo
         />
         <YAxis
           domain={[Math.max(0, low - pad), high + pad]}
+          ticks={niceTicks(Math.max(0, low - pad), high + pad)}
           tickFormatter={(v: number) => fixed(v, decimals)}
           tick={{ fontSize: 11, fill: GRAPHITE, fontFamily: "var(--font-mono)" }}
           stroke={INK}

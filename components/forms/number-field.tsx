@@ -37,7 +37,7 @@ export function NumberField({
           />
         </div>
         {suffix ? (
-          <span className="numeric flex w-[5.5rem] shrink-0 items-center rounded-r-[var(--radius-sheet)] border border-l-0 border-rule-strong bg-paper px-3 text-sm text-graphite">
+          <span className="numeric flex w-24 shrink-0 items-center rounded-r-[var(--radius-sheet)] border border-l-0 border-rule-strong bg-paper px-3 text-sm text-graphite">
             {suffix}
           </span>
         ) : null}

@@ -54,7 +54,7 @@ export function QuantityField<U extends string>({
             className="numeric rounded-r-none text-right"
           />
         </div>
-        <div className="w-[5.5rem] shrink-0">
+        <div className="w-24 shrink-0">
           <Select
             {...getSelectProps(unit, { ariaAttributes: false })}
             key={unit.key}

@@ -45,51 +45,53 @@ export default async function DrillChartPage({ searchParams }: { searchParams: S
       />
       <Sheet>
         <div className="flex flex-col gap-4">
-        <ChartFilter
-          action="/reference/drills"
-          text={text}
-          textLabel="Find a drill"
-          placeholder="43, Q, 1/8, 0.089, 2.5 mm"
-          choice={system}
-          choiceLabel="Series"
-          choices={DRILL_SYSTEMS.map((s) => ({ value: s, label: SYSTEM_NAMES[s] }))}
-          count={rows.length}
-        />
-        <p className="text-xs text-pencil">
-          Number, letter and fractional sizes per ASME B94.11M; metric sizes in 0.05 mm steps to 2.95 mm, then 0.1 mm steps to
-          13 mm. Smallest first.
-          {text || system ? ` Showing ${[system ? SYSTEM_NAMES[system].toLowerCase() : "", text ? `“${text}”` : ""].filter(Boolean).join(", ")}.` : ""}
-        </p>
-        {rows.length === 0 ? (
-          <p className="py-6 text-center text-graphite">No standard drill matches “{text}”. Try a label such as 43 or a size such as 0.089.</p>
-        ) : (
-          <Table aria-label="Drills" data-testid="drill-chart">
-            <thead>
-              <tr>
-                <Th>Drill</Th>
-                <Th>Series</Th>
-                <Th numeric>Diameter, {unit}</Th>
-                <Th numeric className="text-pencil">
-                  {other}
-                </Th>
-              </tr>
-            </thead>
-            <tbody>
-              {rows.map((drill) => (
-                <tr key={`${drill.system}-${drill.label}`} className="hover:bg-accent-soft/40">
-                  <Td className="numeric font-semibold">{drill.label}</Td>
-                  <Td className="text-graphite">{SYSTEM_NAMES[drill.system]}</Td>
-                  <Td numeric className="font-semibold">
-                    {drillSize(drill, unit)}
-                  </Td>
-                  <Td numeric className="text-graphite">
-                    {drillSize(drill, other)}
-                  </Td>
-                </tr>
-              ))}
-            </tbody>
-          </Table>
-        )}
+          <ChartFilter
+            action="/reference/drills"
+            text={text}
+            textLabel="Find a drill"
+            placeholder="43, Q, 1/8, 0.089, 2.5 mm"
+            choice={system}
+            choiceLabel="Series"
+            choices={DRILL_SYSTEMS.map((s) => ({ value: s, label: SYSTEM_NAMES[s] }))}
+            count={rows.length}
+          />
+          <p className="text-xs text-pencil">
+            Number, letter and fractional sizes per ASME B94.11M; metric sizes in 0.05 mm steps to 2.95 mm, then 0.1 mm steps to
+            13 mm. Smallest first.
+            {text || system ? ` Showing ${[system ? SYSTEM_NAMES[system].toLowerCase() : "", text ? `“${text}”` : ""].filter(Boolean).join(", ")}.` : ""}
+          </p>
+          {rows.length === 0 ? (
+            <p className="py-6 text-center text-graphite">No standard drill matches “{text}”. Try a label such as 43 or a size such as 0.089.</p>
+          ) : (
+            <div className="max-w-3xl">
+              <Table aria-label="Drills" data-testid="drill-chart">
+                <thead>
+                  <tr>
+                    <Th>Drill</Th>
+                    <Th>Series</Th>
+                    <Th numeric>Diameter, {unit}</Th>
+                    <Th numeric className="text-pencil">
+                      {other}
+                    </Th>
+                  </tr>
+                </thead>
+                <tbody>
+                  {rows.map((drill) => (
+                    <tr key={`${drill.system}-${drill.label}`} className="hover:bg-accent-soft/40">
+                      <Td className="numeric font-semibold">{drill.label}</Td>
+                      <Td className="text-graphite">{SYSTEM_NAMES[drill.system]}</Td>
+                      <Td numeric className="font-semibold">
+                        {drillSize(drill, unit)}
+                      </Td>
+                      <Td numeric className="text-graphite">
+                        {drillSize(drill, other)}
+                      </Td>
+                    </tr>
+                  ))}
+                </tbody>
+              </Table>
+            </div>
+          )}
         </div>
       </Sheet>
     </>
