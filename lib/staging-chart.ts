@@ -38,7 +38,7 @@ export interface StagingZoneDto {
   mode: ThrottleMode;
   kind: "lean" | "rich";
   fromPsi: number;
-  /** End of the zone: the next point of the sweep (where the mixture is back in the band), or the last point. */
+  /** End of the zone: where the mixture is back in the band (the next point of the sweep, or a vacuum valve's rating). */
   toPsi: number;
   worstRatio: number;
 }
@@ -101,13 +101,16 @@ export function stagingChartData(
     bandPct: tidy(options.band * 100, 3),
     points: psi.map((p, i) => ({ psi: p, part: curve("part", i), full: curve("full", i), targetAfr: tidy(sweep.targetAfr[i] as number, 4) })),
     zones: sweep.zones.map((zone) => {
+      // A zone lasts until the next point of the sweep, unless its last point is where a vacuum valve opens:
+      // the valve is still shut there and open just above, so the zone ends exactly at the rating.
       const last = sweep.gaugePa.indexOf(zone.toGaugePa);
       const next = sweep.gaugePa[last + 1];
+      const endsAtVacuumValve = model.valves.some((v) => v.kind === "vacuum" && valveOpeningGaugePa(v) === zone.toGaugePa);
       return {
         mode: zone.mode,
         kind: zone.kind,
         fromPsi: psiOf(zone.fromGaugePa),
-        toPsi: psiOf(next ?? zone.toGaugePa),
+        toPsi: psiOf(endsAtVacuumValve ? zone.toGaugePa : (next ?? zone.toGaugePa)),
         worstRatio: tidy(zone.worstRatio, 5),
       };
     }),

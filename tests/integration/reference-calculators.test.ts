@@ -210,6 +210,11 @@ describe("stagingAction", () => {
     // The chart starts at 20 inHg of vacuum: 20 x 3386.389 / 6894.757 = 9.8231 psi below the atmosphere.
     expect(result.chart.fromPsi).toBeCloseTo(-9.8231, 3);
     expect(result.chart.valves).toMatchObject([{ mark: "1", kind: "vacuum", openingText: "6.5 inHg vacuum" }]);
+    // Under vacuum the valve is shut and only the mains meter: lean from the start of the chart up to the
+    // valve's rating, 6.5 x 3386.389 / 6894.757 = 3.1925 psi below the atmosphere (NIST SP 811 factors).
+    const underVacuum = result.chart.zones.find((z) => z.mode === "part" && z.kind === "lean" && z.fromPsi < 0);
+    expect(underVacuum?.fromPsi).toBeCloseTo(-9.8231, 3);
+    expect(underVacuum?.toPsi).toBeCloseTo(-3.1925, 3);
   });
 
   it("balances the sides stage by stage", async () => {
