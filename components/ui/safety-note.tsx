@@ -10,10 +10,26 @@ const panels: Record<SignalWord, string> = {
   NOTICE: "bg-notice text-white",
 };
 
-export function SafetyNote({ signal, title, children }: { signal: SignalWord; title?: string; children: ReactNode }) {
+/** `stacked` puts the signal word above the text, for a phone's narrow column. */
+export function SafetyNote({
+  signal,
+  title,
+  children,
+  layout = "side",
+}: {
+  signal: SignalWord;
+  title?: string;
+  children: ReactNode;
+  layout?: "side" | "stacked";
+}) {
+  const stacked = layout === "stacked";
   return (
-    <aside role="note" aria-label={`${signal}${title ? `: ${title}` : ""}`} className="flex overflow-hidden rounded-[var(--radius-sheet)] border-2 border-ink bg-white text-sm">
-      <div className={`flex min-w-28 items-center justify-center px-3 py-2 font-bold tracking-wider ${panels[signal]}`}>
+    <aside
+      role="note"
+      aria-label={`${signal}${title ? `: ${title}` : ""}`}
+      className={`flex overflow-hidden rounded-[var(--radius-sheet)] border-2 border-ink bg-white ${stacked ? "flex-col text-base" : "text-sm"}`}
+    >
+      <div className={`flex items-center px-3 py-2 font-bold tracking-wider ${stacked ? "justify-start text-lg" : "min-w-28 justify-center"} ${panels[signal]}`}>
         {signal === "NOTICE" ? null : <span aria-hidden className="mr-1.5">⚠</span>}
         {signal}
       </div>
