@@ -2,11 +2,12 @@
 
 import { getFormProps, getInputProps, getTextareaProps, useForm, type FieldMetadata } from "@conform-to/react";
 import Link from "next/link";
-import { useActionState, type ReactNode } from "react";
+import type { ReactNode } from "react";
 import { FieldGroup } from "@/components/forms/calculator-form";
 import { NumberField } from "@/components/forms/number-field";
 import { QuantityField } from "@/components/forms/quantity-field";
 import { SelectField } from "@/components/forms/select-field";
+import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button, buttonClass } from "@/components/ui/button";
 import { Field, FieldErrors, FormMessage, Input, Textarea } from "@/components/ui/field";
 import { createJobAction } from "./actions";
@@ -70,10 +71,13 @@ export function NewJobForm({
   me: Choice;
   unitSystem: "imperial" | "metric";
 }) {
-  const [lastResult, action, pending] = useActionState(createJobAction, undefined);
+  // Submitted in a transition (not as a bare form action), so React does not clear what was typed when the
+  // server sends errors back.
+  const { lastResult, action, pending, onSubmit } = useCalculatorAction(createJobAction);
   const [form, fields] = useForm<NewJobFields>({
     id: "new-job",
     lastResult,
+    onSubmit,
     defaultValue: startingValues(unitSystem, me.id),
     // Checked on the server only (the unit conversion lives there): no round trip per keystroke.
     shouldValidate: "onSubmit",

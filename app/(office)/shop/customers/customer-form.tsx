@@ -3,7 +3,7 @@
 import { getFormProps, getInputProps, getTextareaProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import Link from "next/link";
-import { useActionState } from "react";
+import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button, buttonClass } from "@/components/ui/button";
 import { Field, FormMessage, Input, Textarea } from "@/components/ui/field";
 import { createCustomerAction, updateCustomerAction } from "./actions";
@@ -20,11 +20,13 @@ export interface CustomerFormValues {
 /** Adds a customer, or edits the one given. */
 export function CustomerForm({ customer }: { customer?: CustomerFormValues }) {
   const editing = customer !== undefined;
-  const [lastResult, action, pending] = useActionState(editing ? updateCustomerAction : createCustomerAction, undefined);
+  // Run in a transition so React does not reset the fields behind Conform's back (edits stay visible).
+  const { lastResult, action, pending, onSubmit } = useCalculatorAction(editing ? updateCustomerAction : createCustomerAction);
   const schema = editing ? updateCustomerSchema : customerSchema;
   const [form, fields] = useForm({
     id: editing ? `customer-${customer.customerId}` : "new-customer",
     lastResult,
+    onSubmit,
     defaultValue: customer
       ? { name: customer.name, email: customer.email ?? "", phone: customer.phone ?? "", notes: customer.notes }
       : undefined,
