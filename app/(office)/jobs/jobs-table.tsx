@@ -21,7 +21,6 @@ import { Tag } from "@/components/ui/sheet";
 import { JOB_STATE_LABELS, JOB_STATES, type JobState } from "@/lib/job-states";
 import {
   apiSearch,
-  DEFAULT_VIEW,
   hasFilters,
   JOB_SORT_KEYS,
   JOBS_PAGE_SIZE,
@@ -213,7 +212,8 @@ export function JobsTable({ customers, tuners, shopFloorOnly }: { customers: Cho
 
   function clearFilters() {
     clearTimeout(searchTimer.current);
-    show({ ...DEFAULT_VIEW, sort: view.sort, dir: view.dir });
+    setText("");
+    show({ state: undefined, customer: undefined, tuner: undefined, q: "", page: 1 });
   }
 
   let status: React.ReactNode;
