@@ -76,13 +76,15 @@ export default async function CustomersPage({ searchParams }: { searchParams: Pr
                     </Td>
                     <Td className="text-graphite">{customer.email ?? <span className="text-pencil">–</span>}</Td>
                     <Td className="numeric text-graphite">{customer.phone ?? <span className="text-pencil">–</span>}</Td>
-                    <Td numeric>
+                    <Td className="whitespace-nowrap text-right">
                       {customer.jobCount > 0 ? (
                         <Link href={`/jobs?customer=${customer.id}`} className="font-semibold text-accent-strong hover:underline">
-                          {customer.jobCount} {customer.jobCount === 1 ? "job" : "jobs"} →
+                          <span className="numeric">{customer.jobCount}</span> {customer.jobCount === 1 ? "job" : "jobs"} →
                         </Link>
                       ) : (
-                        <span className="text-pencil">0 jobs</span>
+                        <span className="text-pencil">
+                          <span className="numeric">0</span> jobs
+                        </span>
                       )}
                     </Td>
                     <Td className="text-right">

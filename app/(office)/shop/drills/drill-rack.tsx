@@ -130,11 +130,11 @@ export function DrillRack({ groups, stocked, canEdit }: { groups: RackGroup[]; s
               ) : null
             }
           >
-            <ul className="grid grid-cols-[repeat(auto-fill,minmax(8.5rem,1fr))] gap-px overflow-hidden rounded-[var(--radius-sheet)] border border-rule bg-rule">
+            <ul className="grid grid-cols-[repeat(auto-fill,minmax(10.5rem,1fr))] border-l border-t border-rule">
               {group.drills.map((drill) => {
                 const checked = onRack.has(drill.label);
                 return (
-                  <li key={drill.label} className={checked ? "bg-accent-soft" : "bg-white"}>
+                  <li key={drill.label} className={`border-b border-r border-rule ${checked ? "bg-accent-soft" : "bg-white"}`}>
                     <label className={`flex items-center gap-2 px-2.5 py-1.5 ${canEdit ? "cursor-pointer hover:bg-accent-soft/70" : ""}`}>
                       <input
                         type="checkbox"
