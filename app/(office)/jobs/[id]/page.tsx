@@ -17,7 +17,7 @@ import { PlanView } from "./_plan/plan-view";
 import { changeStateAction, chooseLayoutAction } from "./actions";
 import { RevisionsPanel } from "./revisions-panel";
 import { StateControls } from "./state-controls";
-import { officeMoves } from "./state-moves";
+import { officeIdleNote, officeMoves } from "./state-moves";
 
 export const metadata: Metadata = { title: "Job" };
 
@@ -94,9 +94,9 @@ export default async function JobPage({ params }: Params) {
           <dt className="text-graphite">State</dt>
           <dd>{JOB_STATE_LABELS[job.state].meaning}</dd>
         </dl>
-        {moves.length ? <StateControls action={changeStateAction.bind(null, job.id)} moves={moves} /> : null}
+        {office ? <StateControls action={changeStateAction.bind(null, job.id)} moves={moves} idle={officeIdleNote(job.state)} /> : null}
       </div>
-      <div className="mb-8 grid gap-6 lg:grid-cols-[1fr_28rem]">
+      <div className="mb-8 grid gap-6 lg:grid-cols-[minmax(0,1fr)_32rem]">
         <Sheet title="Engine and fuel">
           <EngineSummary job={job} unit={unit} />
         </Sheet>

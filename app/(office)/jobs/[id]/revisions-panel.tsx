@@ -8,7 +8,7 @@ import { dateTime } from "./_plan/format";
 /** Every approved revision, newest first; each opens its frozen snapshot. */
 export function RevisionsPanel({ jobId, revisions }: { jobId: string; revisions: JobRecord["revisions"] }) {
   return (
-    <Sheet title="Revisions">
+    <Sheet title="Revisions" className="self-start">
       {revisions.length === 0 ? (
         <p className="text-sm text-pencil">Nothing approved yet. Approving the plan keeps it as revision 1.</p>
       ) : (
@@ -17,7 +17,7 @@ export function RevisionsPanel({ jobId, revisions }: { jobId: string; revisions:
             <tr>
               <Th>Rev.</Th>
               <Th>Status</Th>
-              <Th>Approved</Th>
+              <Th>Approved (UTC)</Th>
               <Th>Released</Th>
             </tr>
           </thead>
@@ -35,7 +35,7 @@ export function RevisionsPanel({ jobId, revisions }: { jobId: string; revisions:
                   <br />
                   <span className="numeric text-xs text-graphite">{dateTime(r.approvedAt)}</span>
                 </Td>
-                <Td className="numeric text-xs">{r.releasedAt ? dateTime(r.releasedAt) : "—"}</Td>
+                <Td className="numeric text-xs whitespace-normal">{r.releasedAt ? dateTime(r.releasedAt) : "—"}</Td>
               </tr>
             ))}
           </tbody>

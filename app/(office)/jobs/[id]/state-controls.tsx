@@ -14,12 +14,22 @@ export interface StateMove {
 }
 
 /** The moves the job can make from where it is, as submit buttons of one form. */
-export function StateControls({ action, moves }: { action: (previous: FormResult | undefined, formData: FormData) => Promise<FormResult>; moves: StateMove[] }) {
+export function StateControls({
+  action,
+  moves,
+  idle,
+}: {
+  action: (previous: FormResult | undefined, formData: FormData) => Promise<FormResult>;
+  moves: StateMove[];
+  /** Said instead of buttons when the office has no move to make from here. */
+  idle: string;
+}) {
   const [result, formAction, pending] = useActionState(action, undefined);
   const refused = result && result.httpStatus !== 200 ? (result.error?.[""] ?? result.error?.to ?? ["Not done."]) : undefined;
   return (
     <form action={formAction} aria-label="Job state" className="flex flex-col items-end gap-2">
       <div className="flex flex-wrap justify-end gap-2">
+        {moves.length === 0 ? <p className="max-w-sm text-right text-sm text-graphite">{idle}</p> : null}
         {moves.map((move) => (
           <Button key={move.to} type="submit" name="to" value={move.to} title={move.title} variant={move.primary ? "primary" : "secondary"} disabled={pending}>
             {move.label}

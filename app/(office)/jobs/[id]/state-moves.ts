@@ -17,3 +17,16 @@ export function officeMoves(state: JobState, nextRevision: number): StateMove[] 
       return [];
   }
 }
+
+/** What the office is told when the job moves on without it. */
+export function officeIdleNote(state: JobState): string {
+  switch (state) {
+    case "released":
+    case "machining":
+      return "The bench works from the current revision. Editing the inputs starts a new one.";
+    case "delivered":
+      return "Delivered. Editing the inputs starts a new revision for the car's next visit.";
+    default:
+      return "";
+  }
+}

@@ -8,30 +8,38 @@ import { area, length } from "./format";
 /** What was measured on one block: jets, channel, vacuum passage, clay and grind, pickup tube. */
 export function BlockInputs({ block, unit }: { block: BlockRow; unit: DisplayLengthUnit }) {
   const jets = block.mainJetCount * circleArea(block.mainJetDiameterM);
-  const maybe = (m: number | null) => (m === null ? "not measured" : length(m, unit));
   const runs = block.tubeRunsM ?? [];
-  const hasTube = block.tubeBendRadiusM !== null || runs.length > 0;
+  const lengths: [string, number | null][] = [
+    ["Channel length", block.channelLengthM],
+    ["Least web", block.minWebM],
+    ["Vacuum passage", block.passageDiameterM],
+    ["Passage wall", block.passageWallM],
+    ["Depth available", block.passageDepthM],
+    ["Valve protrusion", block.valveProtrusionM],
+    ["Clay gap", block.measuredGapM],
+    ["Boss wall", block.bossWallM],
+    ["Running clearance", block.runningClearanceM],
+    ...runs.map((r, i): [string, number] => [`Tube run ${i + 1}`, r]),
+    ["Bend radius", block.tubeBendRadiusM],
+    ["Swage", block.tubeSwageM],
+  ];
+  const measured = lengths.filter((entry): entry is [string, number] => entry[1] !== null);
+  const missing = lengths.filter(([, v]) => v === null).map(([label]) => label.toLowerCase());
   return (
-    <Facts label={`${block.side} block measurements`}>
-      <Fact label="Main jets">
-        {block.mainJetCount} × {length(block.mainJetDiameterM, unit)}
-      </Fact>
-      <Fact label="Main-jet area">{area(jets, unit)}</Fact>
-      <Fact label="Channel length">{maybe(block.channelLengthM)}</Fact>
-      <Fact label="Least web">{maybe(block.minWebM)}</Fact>
-      <Fact label="Vacuum passage">{maybe(block.passageDiameterM)}</Fact>
-      <Fact label="Wall · depth">
-        {maybe(block.passageWallM)} · {maybe(block.passageDepthM)}
-      </Fact>
-      <Fact label="Valve protrusion">{maybe(block.valveProtrusionM)}</Fact>
-      <Fact label="Clay gap">{maybe(block.measuredGapM)}</Fact>
-      <Fact label="Boss wall">{maybe(block.bossWallM)}</Fact>
-      {hasTube ? (
-        <Fact label="Pickup tube">
-          {runs.map((r) => length(r, unit)).join(" + ")}
-          {block.tubeBendDeg !== null ? `, ${block.tubeBendDeg}° bend` : ""}
+    <div className="flex flex-col gap-2">
+      <Facts label={`${block.side} block measurements`}>
+        <Fact label="Main jets">
+          {block.mainJetCount} × {length(block.mainJetDiameterM, unit)}
         </Fact>
-      ) : null}
-    </Facts>
+        <Fact label="Main-jet area">{area(jets, unit)}</Fact>
+        {measured.map(([label, m]) => (
+          <Fact key={label} label={label}>
+            {length(m, unit)}
+          </Fact>
+        ))}
+        {block.tubeBendDeg !== null && (runs.length > 0 || block.tubeBendRadiusM !== null) ? <Fact label="Tube bend">{block.tubeBendDeg}°</Fact> : null}
+      </Facts>
+      {missing.length ? <p className="text-xs text-pencil">Not measured: {missing.join(", ")}.</p> : null}
+    </div>
   );
 }

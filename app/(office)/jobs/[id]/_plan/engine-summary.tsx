@@ -8,7 +8,6 @@ import { displacement, percent, power, psi, temperature } from "./format";
 
 export type EngineFacts = Pick<
   Job,
-  | "carburetor"
   | "displacementM3"
   | "fuelKind"
   | "fuelEthanolPct"
@@ -34,9 +33,6 @@ export function EngineSummary({ job, unit }: { job: EngineFacts; unit: DisplayLe
   const afr = (lambda: number) => (lambda * fuel.stoichAfr).toFixed(1);
   return (
     <Facts label="Engine and fuel">
-      <Fact label="Carburetor" plain>
-        {job.carburetor}
-      </Fact>
       <Fact label="Displacement">{displacement(job.displacementM3)}</Fact>
       <Fact label="Fuel" plain>
         {fuelName}
@@ -51,11 +47,15 @@ export function EngineSummary({ job, unit }: { job: EngineFacts; unit: DisplayLe
       <Fact label="Target at peak boost">
         λ {job.targetLambdaPeak.toFixed(2)} · AFR {afr(job.targetLambdaPeak)}
       </Fact>
-      <Fact label="Charge temperature">
-        {job.chargeTemperatureK !== null
-          ? `${temperature(job.chargeTemperatureK, unit)} measured`
-          : `estimated: compressor ${percent(job.compressorEfficiency, 0)}${job.intercooled ? `, intercooler ${percent(job.intercoolerEffectiveness, 0)}` : ", no intercooler"}`}
-      </Fact>
+      {job.chargeTemperatureK !== null ? (
+        <Fact label="Charge temperature">{temperature(job.chargeTemperatureK, unit)} measured</Fact>
+      ) : (
+        <Fact label="Charge temperature" plain>
+          estimated from the compressor
+        </Fact>
+      )}
+      <Fact label="Compressor efficiency">{percent(job.compressorEfficiency, 0)}</Fact>
+      <Fact label="Intercooler">{job.intercooled ? `${percent(job.intercoolerEffectiveness, 0)} effective` : "none"}</Fact>
       <Fact label="Ambient">{temperature(job.ambientTemperatureK, unit)}</Fact>
       <Fact label="Drills solved from" plain>
         {job.useAllDrills ? "every standard drill" : "the shop's rack"}

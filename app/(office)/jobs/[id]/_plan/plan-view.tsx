@@ -40,8 +40,10 @@ export function PlanView({
         if (!block) return null;
         return (
           <Sheet key={block.id} title={SIDE_TITLE[block.side]}>
-            <div className="grid gap-6 lg:grid-cols-[20rem_1fr]">
-              <BlockInputs block={block} unit={unit} />
+            <div className="grid gap-6 lg:grid-cols-[minmax(17rem,20rem)_minmax(0,1fr)]">
+              <div className="self-start">
+                <BlockInputs block={block} unit={unit} />
+              </div>
               <section className="flex min-w-0 flex-col gap-4" aria-label={`${block.side} stages`}>
                 {blockPlan.stages.map((stagePlan, i) => {
                   const stage = block.stages.find((s) => s.id === stagePlan.stageId);

@@ -80,7 +80,9 @@ export function StagePlanView({
                 <Td>{candidate.valveLimited ? <Tag tone="fault">limited</Tag> : "no"}</Td>
                 <Td className="no-print text-right">
                   {isChosen ? (
-                    <Tag tone="accent">chosen · by {plan.chosenBy}</Tag>
+                    <span className="whitespace-nowrap">
+                      <Tag tone="accent">chosen · by {plan.chosenBy}</Tag>
+                    </span>
                   ) : choose ? (
                     <UseLayoutButton action={choose} stageId={stage.id} count={candidate.count} drillLabel={candidate.drill.label} layout={layout} />
                   ) : null}

@@ -13,7 +13,7 @@ export function StagingPanel({ job, plan, blocks, unit }: { job: Job; plan: Conv
   const { balance } = plan.staging;
   return (
     <div className="flex flex-col gap-5">
-      <div className="grid gap-6 xl:grid-cols-2">
+      <div className="flex flex-col gap-8">
         <StagingChart chart={chart} mode="part" unit={unit} />
         <StagingChart chart={chart} mode="full" unit={unit} />
       </div>

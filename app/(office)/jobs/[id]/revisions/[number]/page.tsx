@@ -45,7 +45,7 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
         }
       />
       {superseded ? (
-        <div role="alert" data-testid="superseded-banner" className="mb-6 border-4 border-fault bg-fault-soft px-5 py-4 text-fault">
+        <div role="alert" data-testid="superseded-banner" className="sticky top-0 z-10 mb-6 border-4 border-fault bg-fault-soft px-5 py-4 text-fault shadow-md">
           <p className="text-2xl font-black uppercase tracking-[0.2em]">Superseded</p>
           <p className="mt-1 text-sm font-semibold">
             Do not work from this revision.{" "}
@@ -69,11 +69,13 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
         </Sheet>
         <Sheet title="Approval">
           <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
+            <dt className="text-graphite">Carburetor</dt>
+            <dd className="font-semibold">{String(snapshot.job.carburetor ?? "")}</dd>
             <dt className="text-graphite">Approved by</dt>
             <dd className="font-semibold">{listed.approvedBy}</dd>
-            <dt className="text-graphite">Approved at</dt>
+            <dt className="text-graphite">Approved at (UTC)</dt>
             <dd className="numeric">{dateTime(listed.approvedAt)}</dd>
-            <dt className="text-graphite">Released at</dt>
+            <dt className="text-graphite">Released at (UTC)</dt>
             <dd className="numeric">{listed.releasedAt ? dateTime(listed.releasedAt) : "not released"}</dd>
           </dl>
         </Sheet>
