@@ -68,7 +68,7 @@ export function BlockFields({
       {side === "secondary" ? (
         <FieldGroup title="Pickup tube" columns={4}>
           <QuantityField label="First straight run" field={f.tubeRun1} units={FORM_LENGTH_UNITS} optional hint="From the valve inlet." />
-          <NumberField label="Bend" field={f.tubeBendDeg} suffix="°" />
+          <NumberField label="Bend" field={f.tubeBendDeg} suffix="°" optional hint="Rearward and down." />
           <QuantityField label="Bend radius" field={f.tubeBendRadius} units={FORM_LENGTH_UNITS} optional hint="Centreline." />
           <QuantityField label="Second straight run" field={f.tubeRun2} units={FORM_LENGTH_UNITS} optional />
           <QuantityField label="Swage engagement" field={f.tubeSwage} units={FORM_LENGTH_UNITS} optional />

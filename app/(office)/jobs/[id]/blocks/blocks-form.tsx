@@ -8,6 +8,7 @@ import type { FormResult } from "@/lib/form-action";
 import type { FormLengthUnit } from "@/lib/form-units";
 import { BlockFields } from "./block-fields";
 import { newBlock, type BlocksForm } from "./form-shape";
+import { submitInPlace } from "./submit-in-place";
 
 /**
  * The primary and (optionally) secondary block of one job with their stages. Checked on the server, all or
@@ -36,7 +37,14 @@ export function BlocksEditor({
   const sides = blocks.map((b) => b.getFieldset().side.value);
   const missing = sides.includes("secondary") ? "primary" : "secondary";
   return (
-    <form {...getFormProps(form)} action={formAction} aria-label="Metering blocks" className="flex flex-col gap-6" noValidate>
+    <form
+      {...getFormProps(form)}
+      action={formAction}
+      onSubmit={(event) => submitInPlace(event, form.onSubmit, formAction)}
+      aria-label="Metering blocks"
+      className="flex flex-col gap-6"
+      noValidate
+    >
       <FormMessage errors={lastResult && lastResult.httpStatus !== 200 ? (form.errors ?? ["Check the fields marked below."]) : undefined} />
       <FieldErrors id={fields.blocks.errorId} errors={fields.blocks.errors} />
       {blocks.map((block, i) => (

@@ -9,7 +9,7 @@ export const VACUUM_UNITS = ["inHg", "kPa"] as const;
 export const SETPOINT_UNITS = ["psi", "kPa", "bar"] as const;
 
 export const VALVE_OPTIONS = [
-  { value: "vacuum", label: "Vacuum valve (opens as vacuum falls)" },
+  { value: "vacuum", label: "Vacuum valve" },
   { value: "boost", label: "Boost-referenced valve" },
 ] as const;
 

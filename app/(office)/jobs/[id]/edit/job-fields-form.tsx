@@ -1,11 +1,11 @@
 "use client";
 
 import { getFormProps, getInputProps, getTextareaProps, useForm } from "@conform-to/react";
-import { useActionState } from "react";
 import { FieldGroup } from "@/components/forms/calculator-form";
 import { NumberField } from "@/components/forms/number-field";
 import { QuantityField } from "@/components/forms/quantity-field";
 import { SelectField } from "@/components/forms/select-field";
+import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { Field, FormMessage, Input, Textarea } from "@/components/ui/field";
 import type { FormResult } from "@/lib/form-action";
@@ -22,10 +22,12 @@ export function JobFieldsEditor({
   defaultValue: JobFieldsForm;
   cancelHref: string;
 }) {
-  const [lastResult, formAction, pending] = useActionState(action, undefined);
+  // Run in a transition, so React does not reset the boxes when the server sends errors back.
+  const { lastResult, action: formAction, pending, onSubmit } = useCalculatorAction(action);
   const [form, fields] = useForm<JobFieldsForm>({
     id: "job-fields",
     lastResult,
+    onSubmit,
     defaultValue,
     shouldValidate: "onSubmit",
     shouldRevalidate: "onSubmit",
