@@ -130,7 +130,7 @@ export function DrillRack({ groups, stocked, canEdit }: { groups: RackGroup[]; s
               ) : null
             }
           >
-            <ul className="grid grid-cols-[repeat(auto-fill,minmax(10.5rem,1fr))] border-l border-t border-rule">
+            <ul className="grid grid-cols-[repeat(auto-fill,minmax(11.5rem,1fr))] border-l border-t border-rule">
               {group.drills.map((drill) => {
                 const checked = onRack.has(drill.label);
                 return (
@@ -150,7 +150,7 @@ export function DrillRack({ groups, stocked, canEdit }: { groups: RackGroup[]; s
                         }}
                       />
                       <span className="numeric min-w-10 shrink-0 text-sm font-semibold text-ink">{drill.label}</span>
-                      <span className="numeric ml-auto text-xs text-graphite">{drill.size}</span>
+                      <span className="numeric ml-auto shrink-0 text-xs text-graphite">{drill.size}</span>
                     </label>
                   </li>
                 );
