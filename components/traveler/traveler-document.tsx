@@ -34,23 +34,21 @@ const s = StyleSheet.create({
     paddingBottom: MARGIN + 18,
     paddingHorizontal: MARGIN,
     // No lineHeight here: inherited from the page, it kept absolutely placed text (the footer) from printing.
-    // Inter's contextual alternates change nothing a traveler prints, and shaping them was a third of the render.
-    fontFeatureSettings: { calt: false },
   },
   // Header, repeated on every page.
   header: { borderBottomWidth: 3, borderBottomColor: INK, paddingBottom: 6, marginBottom: 10 },
   headerRow: { flexDirection: "row", alignItems: "stretch" },
-  kicker: { fontSize: 7, fontWeight: 600, textTransform: "uppercase" },
+  kicker: { fontSize: 7, fontWeight: 700, textTransform: "uppercase" },
   jobNumber: { fontFamily: FIGURE_FACE, fontWeight: 500, fontSize: 26, lineHeight: 1.05 },
-  customer: { fontSize: 11, fontWeight: 600, marginTop: 2 },
+  customer: { fontSize: 11, fontWeight: 700, marginTop: 2 },
   sideCell: { justifyContent: "flex-end", paddingHorizontal: 12, borderLeftWidth: 1.5, borderLeftColor: INK, marginLeft: 12 },
   side: { fontSize: 18, fontWeight: 700, textTransform: "uppercase", lineHeight: 1.05 },
   revisionBox: { backgroundColor: INK, paddingHorizontal: 12, paddingVertical: 6, justifyContent: "center", alignItems: "center", minWidth: 150 },
   revision: { color: PAPER, fontSize: 24, fontWeight: 700, lineHeight: 1.05 },
-  revisionStatus: { color: PAPER, fontSize: 8, fontWeight: 600, textTransform: "uppercase", marginTop: 2 },
+  revisionStatus: { color: PAPER, fontSize: 8, fontWeight: 700, textTransform: "uppercase", marginTop: 2 },
   metaRow: { flexDirection: "row", flexWrap: "wrap", marginTop: 6, fontSize: 8.5 },
   metaItem: { marginRight: 16 },
-  metaLabel: { fontWeight: 600 },
+  metaLabel: { fontWeight: 700 },
   banner: { marginTop: 6, borderWidth: 3, borderColor: INK, paddingVertical: 3, alignItems: "center" },
   bannerText: { fontSize: 15, fontWeight: 700 },
   watermark: {
@@ -83,7 +81,7 @@ const s = StyleSheet.create({
   facts: { flexDirection: "row", flexWrap: "wrap", borderTopWidth: 1, borderLeftWidth: 1, borderColor: INK, marginBottom: 8 },
   fact: { borderRightWidth: 1, borderBottomWidth: 1, borderColor: INK, paddingHorizontal: 5, paddingVertical: 2.5 },
   factLabel: { fontSize: 6.5, fontWeight: 700, textTransform: "uppercase" },
-  factValue: { fontSize: 9, fontWeight: 500 },
+  factValue: { fontSize: 9 },
   factFigure: { fontFamily: FIGURE_FACE, fontSize: 9 },
   intro: { flexDirection: "row", marginBottom: 10 },
   sectionTitle: { fontSize: 8, fontWeight: 700, textTransform: "uppercase", borderBottomWidth: 1.5, borderBottomColor: INK, paddingBottom: 2, marginBottom: 4 },
@@ -91,7 +89,7 @@ const s = StyleSheet.create({
   opsTitle: { fontSize: 8, fontWeight: 700, textTransform: "uppercase", marginBottom: 3 },
   qrCell: { width: QR_SIDE + 8, alignItems: "center" },
   qrFrame: { borderWidth: 1.5, borderColor: INK, padding: 3 },
-  qrCaption: { fontSize: 8, fontWeight: 600, textAlign: "center", marginTop: 3, width: QR_SIDE + 8 },
+  qrCaption: { fontSize: 8, fontWeight: 700, textAlign: "center", marginTop: 3, width: QR_SIDE + 8 },
   qrUrl: { fontFamily: FIGURE_FACE, fontSize: 5, textAlign: "center", width: QR_SIDE + 8, marginTop: 1 },
   // Safety.
   safety: { flex: 1, marginRight: 12 },
@@ -103,7 +101,8 @@ const s = StyleSheet.create({
   // Operations.
   op: { borderTopWidth: 3, borderTopColor: INK, paddingTop: 6, paddingBottom: 8 },
   opHead: { flexDirection: "row", alignItems: "flex-start" },
-  opNumber: { fontFamily: FIGURE_FACE, fontWeight: 500, fontSize: 26, lineHeight: 1, width: 58 },
+  opRail: { width: 78, paddingRight: 10 },
+  opNumber: { fontFamily: FIGURE_FACE, fontWeight: 500, fontSize: 26, lineHeight: 1, marginBottom: 6 },
   opBody: { flex: 1 },
   opTitle: { fontSize: 13, fontWeight: 700, marginBottom: 3 },
   instructions: { fontSize: 9.5, lineHeight: 1.3, marginBottom: 5 },
@@ -131,9 +130,9 @@ const s = StyleSheet.create({
   writeIn: { flexDirection: "row", alignItems: "flex-end", borderWidth: 1.5, borderColor: INK, height: 28, width: 128, paddingRight: 4, paddingBottom: 3, justifyContent: "flex-end" },
   writeInUnit: { fontFamily: FIGURE_FACE, fontSize: 8 },
   okBox: { width: 20, height: 20, borderWidth: 1.5, borderColor: INK },
-  signOff: { flexDirection: "row", justifyContent: "flex-end", alignItems: "flex-end" },
-  signOffLabel: { fontSize: 7, fontWeight: 700, textTransform: "uppercase", marginRight: 4, marginBottom: 2 },
-  signOffBox: { borderWidth: 1.5, borderColor: INK, height: 28, marginRight: 12 },
+  signOff: {},
+  signOffLabel: { fontSize: 6.5, fontWeight: 700, textTransform: "uppercase", marginBottom: 1 },
+  signOffBox: { borderWidth: 1.5, borderColor: INK, height: 26, width: 68, marginBottom: 4 },
   end: { borderTopWidth: 3, borderTopColor: INK, paddingTop: 6 },
 });
 
@@ -157,13 +156,15 @@ function SignalBox({ caution }: { caution: SafetyCaution }) {
   );
 }
 
-function CautionRow({ caution }: { caution: SafetyCaution }) {
+/** A caution in full (first page), or in brief beside an operation: its first sentence and where the rest is. */
+function CautionRow({ caution, brief = false }: { caution: SafetyCaution; brief?: boolean }) {
+  const firstSentence = /^.*?[.:](?=\s|$)/.exec(caution.text)?.[0] ?? caution.text;
   return (
     <View style={s.cautionRow} wrap={false}>
       <SignalBox caution={caution} />
       <Text style={s.cautionText}>
         <Text style={s.cautionTitle}>{caution.title}. </Text>
-        {caution.text}
+        {brief ? `${firstSentence} The whole caution is under Safety on page 1.` : caution.text}
       </Text>
     </View>
   );
@@ -345,7 +346,7 @@ function Measurements({ op }: { op: TravelerOperation }) {
         const planned = measured(m.quantity, m.plannedSi);
         return (
           <View key={m.key} style={s.tr} wrap={false}>
-            <Text style={[s.colLabel, { fontWeight: 600 }]}>{m.label}</Text>
+            <Text style={[s.colLabel, { fontWeight: 700 }]}>{m.label}</Text>
             <View style={s.colPlan}>
               <Text style={s.figure}>{planned.main}</Text>
               <Text style={[s.figure, { fontSize: 7.5 }]}>{planned.other}</Text>
@@ -366,13 +367,14 @@ function Measurements({ op }: { op: TravelerOperation }) {
   );
 }
 
+/** The step's sign-off, under its number: who did it and when, in boxes big enough for a pencil. */
 function SignOff() {
   return (
-    <View style={s.signOff} wrap={false}>
-      <Text style={s.signOffLabel}>Done by (initials)</Text>
-      <View style={[s.signOffBox, { width: 72 }]} />
+    <View style={s.signOff}>
+      <Text style={s.signOffLabel}>Initials</Text>
+      <View style={s.signOffBox} />
       <Text style={s.signOffLabel}>Date</Text>
-      <View style={[s.signOffBox, { width: 96, marginRight: 0 }]} />
+      <View style={s.signOffBox} />
     </View>
   );
 }
@@ -390,16 +392,18 @@ function Operation({ op, lead }: { op: TravelerOperation; lead?: string | undefi
       {lead ? <Text style={s.opsTitle}>{lead}</Text> : null}
       <View style={s.op}>
         <View style={s.opHead}>
-          <Text style={s.opNumber}>{op.number}</Text>
+          <View style={s.opRail}>
+            <Text style={s.opNumber}>{op.number}</Text>
+            <SignOff />
+          </View>
           <View style={s.opBody}>
             <Text style={s.opTitle}>{op.title}</Text>
             <Text style={s.instructions}>{op.instructions}</Text>
-            {caution ? <CautionRow caution={caution} /> : null}
+            {caution ? <CautionRow caution={caution} brief /> : null}
             <View style={{ height: 4 }} />
             <Callouts op={op} />
             <GrindPasses op={op} />
             <Measurements op={op} />
-            <SignOff />
           </View>
         </View>
       </View>

@@ -6,14 +6,16 @@ import { inflateSync } from "node:zlib";
  * the fonts are registered: @react-pdf/renderer reads WOFF directly, but it then inflates the tables again on
  * every render, which dominated the traveler's render time.
  */
-export function woffToSfnt(woff: Buffer): Buffer {
+export function woffToSfnt(woff: Buffer, options: { without?: readonly string[] } = {}): Buffer {
+  const without = new Set(options.without ?? []);
   if (woff.toString("latin1", 0, 4) !== "wOFF") throw new Error("not a WOFF 1.0 font");
   const flavor = woff.readUInt32BE(4);
-  const numTables = woff.readUInt16BE(12);
+  const count = woff.readUInt16BE(12);
   const tables: { tag: number; checksum: number; data: Buffer }[] = [];
-  for (let i = 0; i < numTables; i++) {
+  for (let i = 0; i < count; i++) {
     const entry = 44 + i * 20;
     const tag = woff.readUInt32BE(entry);
+    if (without.has(woff.toString("latin1", entry, entry + 4))) continue;
     const offset = woff.readUInt32BE(entry + 4);
     const compLength = woff.readUInt32BE(entry + 8);
     const origLength = woff.readUInt32BE(entry + 12);
@@ -23,6 +25,7 @@ export function woffToSfnt(woff: Buffer): Buffer {
     if (data.length !== origLength) throw new Error("WOFF table length does not match its header");
     tables.push({ tag, checksum, data });
   }
+  const numTables = tables.length;
   // sfnt offset table: binary-search fields from the largest power of two not above numTables.
   const entrySelector = Math.floor(Math.log2(numTables));
   const searchRange = 2 ** entrySelector * 16;
