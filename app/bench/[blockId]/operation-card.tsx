@@ -376,8 +376,8 @@ function SignedSummary({
         <p role="status" className="rounded-[var(--radius-sheet)] border-2 border-ink bg-white px-3 py-2 font-semibold">
           Already signed: nothing was recorded twice.
         </p>
-      ) : lastResult?.httpStatus === 200 && lastResult.message ? (
-        <p role="status" className="font-semibold text-accent-strong">
+      ) : lastResult?.httpStatus === 200 && lastResult.message && (lastResult.data?.failed.length || lastResult.data?.verified) ? (
+        <p role="status" className={`font-semibold ${lastResult.data?.failed.length ? "text-fault" : "text-accent-strong"}`}>
           {lastResult.message}
         </p>
       ) : null}
