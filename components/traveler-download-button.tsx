@@ -73,7 +73,8 @@ export function TravelerDownloadButton({
         setProgress({ step: "error", message: await refusalMessage(response) });
         return;
       }
-      const total = Number(response.headers.get("content-length")) || null;
+      // The server repeats the size in its own header: Next sends route handler responses without Content-Length.
+      const total = Number(response.headers.get("content-length")) || Number(response.headers.get("x-traveler-bytes")) || null;
       const chunks: Uint8Array<ArrayBuffer>[] = [];
       let received = 0;
       const reader = response.body?.getReader();

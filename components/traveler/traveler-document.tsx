@@ -80,7 +80,7 @@ const s = StyleSheet.create({
   // First page: the job and the code.
   facts: { flexDirection: "row", flexWrap: "wrap", borderTopWidth: 1, borderLeftWidth: 1, borderColor: INK, marginBottom: 8 },
   fact: { borderRightWidth: 1, borderBottomWidth: 1, borderColor: INK, paddingHorizontal: 5, paddingVertical: 2.5 },
-  factLabel: { fontSize: 6.5, fontWeight: 700, textTransform: "uppercase" },
+  factLabel: { fontSize: 7, fontWeight: 700, textTransform: "uppercase" },
   factValue: { fontSize: 9 },
   factFigure: { fontFamily: FIGURE_FACE, fontSize: 9 },
   intro: { flexDirection: "row", marginBottom: 10 },
@@ -108,19 +108,19 @@ const s = StyleSheet.create({
   instructions: { fontSize: 9.5, lineHeight: 1.3, marginBottom: 5 },
   callouts: { flexDirection: "row", flexWrap: "wrap", borderTopWidth: 1, borderLeftWidth: 1, borderColor: INK, marginBottom: 5 },
   callout: { width: "25%", borderRightWidth: 1, borderBottomWidth: 1, borderColor: INK, paddingHorizontal: 5, paddingVertical: 3 },
-  calloutLabel: { fontSize: 6.5, fontWeight: 700, textTransform: "uppercase" },
+  calloutLabel: { fontSize: 7, fontWeight: 700, textTransform: "uppercase" },
   calloutValue: { fontFamily: FIGURE_FACE, fontWeight: 500, fontSize: 12, lineHeight: 1.15 },
   calloutText: { fontSize: 10.5, fontWeight: 700, lineHeight: 1.2 },
   calloutDetail: { fontFamily: FIGURE_FACE, fontSize: 7.5 },
   passes: { flexDirection: "row", flexWrap: "wrap", marginBottom: 5 },
   pass: { width: 62, borderWidth: 1, borderColor: INK, marginRight: 3, marginBottom: 3, padding: 3, alignItems: "center" },
-  passLabel: { fontSize: 6.5, fontWeight: 700, textTransform: "uppercase" },
+  passLabel: { fontSize: 7, fontWeight: 700, textTransform: "uppercase" },
   passDepth: { fontFamily: FIGURE_FACE, fontSize: 8 },
   passCheck: { flexDirection: "row", alignItems: "center", marginTop: 2, fontSize: 7 },
   tickBox: { width: 11, height: 11, borderWidth: 1.2, borderColor: INK, marginRight: 3 },
   table: { borderTopWidth: 1.5, borderColor: INK, marginBottom: 6 },
   tableHead: { flexDirection: "row", borderBottomWidth: 1, borderColor: INK, paddingVertical: 2 },
-  th: { fontSize: 6.5, fontWeight: 700, textTransform: "uppercase" },
+  th: { fontSize: 7, fontWeight: 700, textTransform: "uppercase" },
   tr: { flexDirection: "row", alignItems: "center", borderBottomWidth: 1, borderColor: INK, paddingVertical: 3 },
   colLabel: { flex: 1.15, paddingRight: 4 },
   colPlan: { flex: 1, paddingRight: 4 },
@@ -131,9 +131,11 @@ const s = StyleSheet.create({
   writeInUnit: { fontFamily: FIGURE_FACE, fontSize: 8 },
   okBox: { width: 20, height: 20, borderWidth: 1.5, borderColor: INK },
   signOff: {},
-  signOffLabel: { fontSize: 6.5, fontWeight: 700, textTransform: "uppercase", marginBottom: 1 },
+  signOffLabel: { fontSize: 7, fontWeight: 700, textTransform: "uppercase", marginBottom: 1 },
   signOffBox: { borderWidth: 1.5, borderColor: INK, height: 26, width: 68, marginBottom: 4 },
-  end: { borderTopWidth: 3, borderTopColor: INK, paddingTop: 6 },
+  end: { borderTopWidth: 3, borderTopColor: INK, paddingTop: 6, flexDirection: "row", alignItems: "flex-end" },
+  endText: { flex: 1, fontSize: 8.5, paddingRight: 12 },
+  endSignOff: { flexDirection: "row", alignItems: "flex-end" },
 });
 
 function SafetyAlertSymbol({ size }: { size: number }) {
@@ -449,7 +451,16 @@ export function TravelerDocument({ data, qr, paper, printedAt }: TravelerDocumen
           <Operation key={op.number} op={op} lead={i === 0 ? "Operations, in order" : undefined} />
         ))}
         <View style={s.end} wrap={false}>
-          <Text style={{ fontSize: 8 }}>End of traveler for the {data.block.side} block. Every operation above is signed before the block goes back on the carburetor.</Text>
+          <Text style={s.endText}>
+            End of the traveler for the {data.block.side} block. Every operation above is signed, and every measurement written in, before the
+            block goes back on the carburetor.
+          </Text>
+          <View style={s.endSignOff}>
+            <Text style={[s.signOffLabel, { marginRight: 4 }]}>Block checked by</Text>
+            <View style={[s.signOffBox, { marginRight: 12 }]} />
+            <Text style={[s.signOffLabel, { marginRight: 4 }]}>Date</Text>
+            <View style={s.signOffBox} />
+          </View>
         </View>
         <Footer data={data} printedAt={printedAt} />
       </Page>

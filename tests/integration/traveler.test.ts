@@ -88,6 +88,7 @@ describe("GET /api/blocks/{id}/traveler", () => {
     expect(response.headers.get("content-disposition")).toBe(`attachment; filename="${job.number}-primary-rev1.pdf"`);
     const bytes = new Uint8Array(await response.arrayBuffer());
     expect(Number(response.headers.get("content-length"))).toBe(bytes.byteLength);
+    expect(Number(response.headers.get("x-traveler-bytes"))).toBe(bytes.byteLength);
     expect(Buffer.from(bytes.subarray(0, 5)).toString("latin1")).toBe("%PDF-");
 
     const file = await savePdf(bytes);

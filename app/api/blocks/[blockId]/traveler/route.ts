@@ -34,6 +34,9 @@ export async function GET(request: Request, { params }: Params) {
       headers: {
         "content-type": "application/pdf",
         "content-length": String(pdf.byteLength),
+        // Next drops Content-Length from a route handler's response (it sends it chunked); the download
+        // control reads its progress against this instead.
+        "x-traveler-bytes": String(pdf.byteLength),
         "content-disposition": `attachment; filename="${filename}"`,
         "cache-control": "private, no-store",
       },
