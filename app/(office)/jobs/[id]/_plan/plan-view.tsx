@@ -7,6 +7,7 @@ import { Sheet } from "@/components/ui/sheet";
 import { BenchWork } from "./bench-work";
 import { BlockInputs } from "./block-inputs";
 import { PlanSafety } from "./plan-safety";
+import { PlanSummary } from "./plan-summary";
 import { PlanWarnings } from "./plan-warnings";
 import { StagePlanView, type ChooseLayout } from "./stage-plan";
 import { StagingPanel } from "./staging-panel";
@@ -35,6 +36,9 @@ export function PlanView({
   return (
     <div className="flex flex-col gap-6">
       <PlanWarnings warnings={plan.warnings} />
+      <Sheet title="At a glance">
+        <PlanSummary blocks={blocks} plan={plan} marks={marks} unit={unit} />
+      </Sheet>
       {plan.blocks.map((blockPlan) => {
         const block = blocks.find((b) => b.id === blockPlan.blockId);
         if (!block) return null;
