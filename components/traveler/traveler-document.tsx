@@ -1,4 +1,4 @@
-import { Document, Page, Path, Polygon, Rect, StyleSheet, Svg, Text, View } from "@react-pdf/renderer";
+import { Document, Page, Path, Rect, StyleSheet, Svg, Text, View } from "@react-pdf/renderer";
 import type { ReactNode } from "react";
 import type { CautionTopic } from "@/lib/engineering/conversion-plan";
 import { SAFETY_CAUTIONS, type SafetyCaution } from "@/lib/safety";
@@ -138,13 +138,14 @@ const s = StyleSheet.create({
   endSignOff: { flexDirection: "row", alignItems: "flex-end" },
 });
 
+// The safety alert symbol of ANSI Z535 (a triangle with an exclamation mark), white on the black box: one path,
+// the mark cut out of the triangle by the even-odd rule.
+const ALERT_SYMBOL = "M12 1.5L23 22H1Z M10.6 8H13.4V16H10.6Z M10.6 17.6H13.4V20.4H10.6Z";
+
 function SafetyAlertSymbol({ size }: { size: number }) {
-  // The safety alert symbol of ANSI Z535 (a triangle with an exclamation mark), drawn in white on the black box.
   return (
     <Svg width={size} height={size} viewBox="0 0 24 24" style={{ marginRight: 3 }}>
-      <Polygon points="12,1.5 23,22 1,22" fill={PAPER} />
-      <Rect x={10.6} y={8} width={2.8} height={8} fill={INK} />
-      <Rect x={10.6} y={17.6} width={2.8} height={2.8} fill={INK} />
+      <Path d={ALERT_SYMBOL} fill={PAPER} fillRule="evenodd" />
     </Svg>
   );
 }
