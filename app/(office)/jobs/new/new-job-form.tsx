@@ -1,24 +1,26 @@
 "use client";
 
-import { getFormProps, getInputProps, getTextareaProps, useForm, type FieldMetadata } from "@conform-to/react";
+import { getFormProps, getInputProps, getTextareaProps, useForm } from "@conform-to/react";
 import Link from "next/link";
-import type { ReactNode } from "react";
 import { FieldGroup } from "@/components/forms/calculator-form";
 import { NumberField } from "@/components/forms/number-field";
 import { QuantityField } from "@/components/forms/quantity-field";
 import { SelectField } from "@/components/forms/select-field";
 import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button, buttonClass } from "@/components/ui/button";
-import { Field, FieldErrors, FormMessage, Input, Textarea } from "@/components/ui/field";
+import { Field, FormMessage, Input, Textarea } from "@/components/ui/field";
 import { createJobAction } from "./actions";
 import {
-  BOOST_CHOICES,
-  DISPLACEMENT_CHOICES,
-  FUEL_CHOICES,
-  POWER_CHOICES,
-  TEMPERATURE_CHOICES,
-  type NewJobForm as NewJobFields,
-} from "./form-shape";
+  BOOST_UNITS,
+  DISPLACEMENT_UNITS,
+  FUEL_OPTIONS,
+  POWER_UNITS,
+  TEMPERATURE_UNITS,
+  type JobFieldsForm,
+} from "../job-fields-shape";
+import { CheckboxField } from "@/components/forms/checkbox-field";
+
+type NewJobFields = JobFieldsForm & { customerId?: string; newCustomerName?: string; tunerId?: string };
 
 interface Choice {
   id: string;
@@ -44,19 +46,6 @@ function startingValues(system: "imperial" | "metric", tunerId: string): NewJobF
     compressorEfficiencyPct: 70,
     intercoolerEffectivenessPct: 70,
   };
-}
-
-function CheckboxField({ field, label, hint }: { field: FieldMetadata<boolean | undefined, NewJobFields, string[]>; label: ReactNode; hint?: ReactNode }) {
-  return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor={field.id} className="flex min-h-10 items-center gap-3 text-sm font-semibold text-ink">
-        <input {...getInputProps(field, { type: "checkbox" })} key={field.key} className="h-5 w-5 accent-accent" />
-        {label}
-      </label>
-      {hint && !field.errors?.length ? <p className="text-xs text-pencil">{hint}</p> : null}
-      <FieldErrors id={field.errorId} errors={field.errors} />
-    </div>
-  );
 }
 
 export function NewJobForm({
@@ -130,12 +119,12 @@ export function NewJobForm({
         >
           <Input {...getInputProps(fields.carburetor, { type: "text" })} key={fields.carburetor.key} autoComplete="off" />
         </Field>
-        <QuantityField label="Displacement" field={fields.displacement} units={DISPLACEMENT_CHOICES} hint="Swept volume of the whole engine." />
-        <QuantityField label="Target power" field={fields.targetPower} units={POWER_CHOICES} optional hint="At the flywheel; sizes fuel demand from BSFC." />
+        <QuantityField label="Displacement" field={fields.displacement} units={DISPLACEMENT_UNITS} hint="Swept volume of the whole engine." />
+        <QuantityField label="Target power" field={fields.targetPower} units={POWER_UNITS} optional hint="At the flywheel; sizes fuel demand from BSFC." />
       </FieldGroup>
 
       <FieldGroup title="Fuel" columns={3}>
-        <SelectField label="Fuel" field={fields.fuelKind} options={FUEL_CHOICES} />
+        <SelectField label="Fuel" field={fields.fuelKind} options={FUEL_OPTIONS} />
         {fuel === "blend" ? (
           <NumberField label="Ethanol content" field={fields.ethanolPct} suffix="% vol" hint="85 for E85; the rest is gasoline." />
         ) : null}
@@ -148,7 +137,7 @@ export function NewJobForm({
       </FieldGroup>
 
       <FieldGroup title="Boost and mixture" columns={3}>
-        <QuantityField label="Peak boost" field={fields.peakBoost} units={BOOST_CHOICES} hint="Gauge pressure at the top of the boost range." />
+        <QuantityField label="Peak boost" field={fields.peakBoost} units={BOOST_UNITS} hint="Gauge pressure at the top of the boost range." />
         <NumberField
           label="Target lambda, atmospheric"
           field={fields.targetLambdaAtmosphere}
@@ -168,11 +157,11 @@ export function NewJobForm({
         <QuantityField
           label="Charge temperature"
           field={fields.chargeTemperature}
-          units={TEMPERATURE_CHOICES}
+          units={TEMPERATURE_UNITS}
           optional
           hint="Measured at the carburetor hat at peak boost. Leave empty to estimate it from the compressor and intercooler."
         />
-        <QuantityField label="Ambient temperature" field={fields.ambientTemperature} units={TEMPERATURE_CHOICES} hint="Air at the compressor inlet." />
+        <QuantityField label="Ambient temperature" field={fields.ambientTemperature} units={TEMPERATURE_UNITS} hint="Air at the compressor inlet." />
         <NumberField label="Compressor efficiency" field={fields.compressorEfficiencyPct} suffix="%" hint="Isentropic, at peak boost; 70 % when unknown." />
         <NumberField
           label="Intercooler effectiveness"

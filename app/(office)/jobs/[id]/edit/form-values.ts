@@ -2,7 +2,7 @@ import "server-only";
 import type { Job } from "@/db/schema";
 import type { DisplayLengthUnit } from "@/lib/display";
 import { fromSI } from "@/lib/engineering/units";
-import type { JobFieldsForm } from "./form-shape";
+import type { JobFieldsForm } from "../../job-fields-shape";
 
 /** A stored figure as a person would type it: six significant digits, no float noise. */
 export const typed = (v: number) => Number(v.toPrecision(6));

@@ -9,8 +9,8 @@ import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { Field, FormMessage, Input, Textarea } from "@/components/ui/field";
 import type { FormResult } from "@/lib/form-action";
-import { CheckboxField } from "./checkbox-field";
-import { BOOST_UNITS, DISPLACEMENT_UNITS, FUEL_OPTIONS, POWER_UNITS, TEMPERATURE_UNITS, type JobFieldsForm } from "./form-shape";
+import { CheckboxField } from "@/components/forms/checkbox-field";
+import { BOOST_UNITS, DISPLACEMENT_UNITS, FUEL_OPTIONS, POWER_UNITS, TEMPERATURE_UNITS, type JobFieldsForm } from "../../job-fields-shape";
 
 /** Engine, fuel and boost of one job. Checked on the server; what was typed stays after an error. */
 export function JobFieldsEditor({

@@ -5,7 +5,15 @@ import type { ReactNode } from "react";
 import { FieldErrors } from "@/components/ui/field";
 
 /** A yes/no box with its label beside it, large enough to hit. */
-export function CheckboxField({ field, label, hint }: { field: FieldMetadata<boolean | undefined, Record<string, unknown>, string[]>; label: ReactNode; hint?: ReactNode }) {
+export function CheckboxField<Form extends Record<string, unknown>>({
+  field,
+  label,
+  hint,
+}: {
+  field: FieldMetadata<boolean | undefined, Form, string[]>;
+  label: ReactNode;
+  hint?: ReactNode;
+}) {
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={field.id} className="flex min-h-10 items-center gap-3 text-sm font-semibold text-ink">

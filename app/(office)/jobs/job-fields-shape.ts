@@ -1,7 +1,8 @@
 import type { DisplacementUnit, PowerUnit, PressureUnit, TemperatureUnit } from "@/lib/engineering/units";
 
-// The engine-and-fuel form as the browser holds it, and the units each quantity offers. Type-only imports:
-// the form is checked on the server, where the unit library lives.
+// The engine-and-fuel fields as the browser holds them (the new-job form and the edit form share them), and
+// the units each quantity offers. Type-only imports: the forms are checked on the server, where the unit
+// library lives.
 
 export const DISPLACEMENT_UNITS = ["in³", "L", "cc"] as const satisfies readonly DisplacementUnit[];
 export const POWER_UNITS = ["hp", "kW"] as const satisfies readonly PowerUnit[];
