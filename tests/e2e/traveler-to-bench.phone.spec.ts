@@ -93,6 +93,8 @@ test("a traveler's QR code opens the bench page, where every operation is signed
   await expect(signedCard.getByTestId("signed-by")).toHaveText(/at \d{2}:\d{2}/);
   await expect(signedCard).toContainText("Clay showed a clean gap.");
   await expect(page.getByTestId("block-photos").getByRole("img")).toHaveCount(1);
+  await expect(signedCard.getByRole("img", { name: "Photo of this operation" })).toBeVisible();
+  await signedCard.screenshot({ path: screenshotPath("bench-signed-card") });
 
   // Mid-way through the work, with readings typed into the next card: what the phone shows.
   await bench.fillOnPlan(holes);

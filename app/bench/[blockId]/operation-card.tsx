@@ -404,7 +404,18 @@ function SignedSummary({
         </ul>
       ) : null}
       {signOff.note ? <p className="text-base">Note: {signOff.note}</p> : null}
-      {photoIds.length ? <p className="text-sm text-graphite">{photoIds.length === 1 ? "1 photo" : `${photoIds.length} photos`} with this operation.</p> : null}
+      {photoIds.length ? (
+        <ul className="grid grid-cols-4 gap-2" aria-label="Photos of this operation">
+          {photoIds.map((id) => (
+            <li key={id}>
+              <a href={`/api/photos/${id}`} className="block">
+                {/* eslint-disable-next-line @next/next/no-img-element -- our own thumbnail route */}
+                <img src={`/api/photos/${id}?size=thumb`} alt="Photo of this operation" className="aspect-square w-full rounded-[var(--radius-sheet)] border-2 border-ink object-cover" />
+              </a>
+            </li>
+          ))}
+        </ul>
+      ) : null}
       <details className="group">
         <summary className="flex min-h-11 cursor-pointer items-center font-semibold text-accent underline">Show the work again</summary>
         <div className="flex flex-col gap-3 pt-2">
