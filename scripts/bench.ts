@@ -6,15 +6,24 @@
 // its budget. Prints median and p95 per call and PASS/FAIL; exits with code 1 if any case fails.
 // To add a case, append to CASES: a name, a budget in milliseconds and a function doing one call (it may
 // return a promise, which is awaited).
+// `npm run bench` sets NODE_ENV=production, as `next start` does: React's development build (extra checks in
+// every render) would otherwise be measured in the traveler's PDF render.
 
 import { ALL_DRILLS } from "../lib/engineering/drills";
 import { solveHoleLayout } from "../lib/engineering/hole-layout";
 import { proposeStaging, type StagingModel } from "../lib/engineering/staging";
+import { planConversion } from "../lib/engineering/conversion-plan";
+import { GASOLINE } from "../lib/engineering/fuels";
+import { travelerOperations } from "../lib/traveler/operations";
+import type { TravelerData } from "../lib/traveler/types";
+import { renderTravelerPdf } from "../components/traveler/render-traveler";
 
 interface BenchCase {
   name: string;
   budgetMs: number;
   run: () => unknown;
+  /** Calls to make before measuring even when the warm-up time is over (slow cases get few calls in it). */
+  warmupCalls?: number;
 }
 
 // Inputs in shop units, converted with NIST SP 811 factors.
@@ -30,6 +39,53 @@ const STAGING_MODEL: StagingModel = {
   ambient: { pressurePa: 101_325, temperatureK: 298.15 },
   target: { atmosphereAfr: 12.8, peakBoostAfr: 11.5, peakBoostGaugePa: 12 * PA_PER_PSI },
   charge: { kind: "compressor", efficiency: 0.7, intercoolerEffectiveness: 0.7 },
+};
+
+// Demo traveler, built in memory from the planner (no database): the primary block of a boosted four-barrel
+// with a clearance grind, a plugged vacuum passage, two restriction stages and a boost valve to set.
+const TRAVELER_PLAN = planConversion({
+  engine: {
+    fuel: GASOLINE,
+    peakBoostPa: 10 * PA_PER_PSI,
+    targetLambdaAtmosphere: 0.88,
+    targetLambdaPeak: 0.78,
+    ambientTemperatureK: 298.15,
+    compressorEfficiency: 0.7,
+    intercoolerEffectiveness: 0.7,
+  },
+  blocks: [
+    {
+      id: "5f0e7c1a-2b3d-4e5f-8a9b-0c1d2e3f4a5b",
+      side: "primary",
+      mainJetDiameterM: 0.08 * M_PER_IN,
+      mainJetCount: 2,
+      channelLengthM: 0.3 * M_PER_IN,
+      minWebM: 0.03 * M_PER_IN,
+      passage: { diameterM: 0.085 * M_PER_IN, wallM: 0.2 * M_PER_IN, depthM: 0.4 * M_PER_IN },
+      grind: { valveProtrusionM: 0.04 * M_PER_IN, measuredGapM: 0, bossWallM: 0.25 * M_PER_IN },
+      stages: [
+        { id: "vacuum", valve: { kind: "vacuum", ratingPa: 6.5 * PA_PER_INHG }, target: { kind: "percentMainJet", percent: 31.5 }, maxHoles: 4 },
+        { id: "boost-3", valve: { kind: "boost", setpointPa: 3 * PA_PER_PSI }, target: { kind: "afr", from: 12.5, to: 11.5 }, maxHoles: 4 },
+      ],
+    },
+  ],
+  drills: ALL_DRILLS,
+});
+const TRAVELER_BLOCK = TRAVELER_PLAN.blocks[0]!;
+const TRAVELER: TravelerData = {
+  job: { number: "BW-0042", customer: "Wren Halloway", carburetor: "Four-barrel, vacuum secondaries, blow-through hat", displacementM3: 0.0057, fuel: "Gasoline", peakBoostPa: 10 * PA_PER_PSI },
+  block: { id: TRAVELER_BLOCK.blockId, side: "primary", mainJetDiameterM: 0.08 * M_PER_IN, mainJetCount: 2 },
+  revision: {
+    number: 1,
+    status: "current",
+    approvedAt: "2025-06-01T10:00:00.000Z",
+    approvedBy: "Mara Quillon",
+    releasedAt: "2025-06-02T08:00:00.000Z",
+    releasedBy: "Avery Lindqvist",
+    tuner: "Mara Quillon",
+  },
+  operations: travelerOperations(TRAVELER_BLOCK.operations, TRAVELER_BLOCK),
+  benchUrl: `http://127.0.0.1:3000/bench/${TRAVELER_BLOCK.blockId}?revision=1`,
 };
 
 let holeTargetStep = 0;
@@ -64,6 +120,13 @@ const CASES: BenchCase[] = [
         layout: { drills: ALL_DRILLS, maxHoles: 4, channelLengthM: 0.5 * M_PER_IN, minWebM: 0.03 * M_PER_IN },
       }),
   },
+  {
+    // Fonts are registered and loaded by the warm-up; each call lays out and writes the whole PDF anew.
+    name: "traveler PDF render (one block)",
+    budgetMs: 300,
+    warmupCalls: 10,
+    run: () => renderTravelerPdf(TRAVELER),
+  },
 ];
 
 const WARMUP_MS = 500;
@@ -83,7 +146,7 @@ function quantile(sorted: readonly number[], q: number): number {
 
 async function measure(c: BenchCase): Promise<{ median: number; p95: number; samples: number }> {
   const warmupEnd = performance.now() + WARMUP_MS;
-  while (performance.now() < warmupEnd) await callOnce(c.run);
+  for (let calls = 0; performance.now() < warmupEnd || calls < (c.warmupCalls ?? 0); calls++) await callOnce(c.run);
   const times: number[] = [];
   const end = performance.now() + MEASURE_MS;
   while ((times.length < MIN_SAMPLES || performance.now() < end) && times.length < MAX_SAMPLES) {
@@ -98,6 +161,9 @@ async function measure(c: BenchCase): Promise<{ median: number; p95: number; sam
 const format = (ms: number) => (ms < 1 ? `${(ms * 1000).toFixed(1)} µs` : `${ms.toFixed(2)} ms`);
 
 async function main(): Promise<void> {
+  if (process.env.NODE_ENV !== "production") {
+    console.warn("NODE_ENV is not production: React runs its development build here (use npm run bench).");
+  }
   let failed = false;
   for (const c of CASES) {
     const { median, p95, samples } = await measure(c);

@@ -46,8 +46,7 @@ const s = StyleSheet.create({
   revisionBox: { backgroundColor: INK, paddingHorizontal: 12, paddingVertical: 6, justifyContent: "center", alignItems: "center", minWidth: 150 },
   revision: { color: PAPER, fontSize: 24, fontWeight: 700, lineHeight: 1.05 },
   revisionStatus: { color: PAPER, fontSize: 8, fontWeight: 700, textTransform: "uppercase", marginTop: 2 },
-  metaRow: { flexDirection: "row", flexWrap: "wrap", marginTop: 6, fontSize: 8.5 },
-  metaItem: { marginRight: 16 },
+  metaRow: { marginTop: 6, fontSize: 8.5 },
   metaLabel: { fontWeight: 700 },
   banner: { marginTop: 6, borderWidth: 3, borderColor: INK, paddingVertical: 3, alignItems: "center" },
   bannerText: { fontSize: 15, fontWeight: 700 },
@@ -110,8 +109,9 @@ const s = StyleSheet.create({
   callout: { width: "25%", borderRightWidth: 1, borderBottomWidth: 1, borderColor: INK, paddingHorizontal: 5, paddingVertical: 3 },
   calloutLabel: { fontSize: 7, fontWeight: 700, textTransform: "uppercase" },
   calloutValue: { fontFamily: FIGURE_FACE, fontWeight: 500, fontSize: 12, lineHeight: 1.15 },
-  calloutText: { fontSize: 10.5, fontWeight: 700, lineHeight: 1.2 },
+  calloutText: { fontSize: 10, fontWeight: 700, lineHeight: 1.2 },
   calloutDetail: { fontFamily: FIGURE_FACE, fontSize: 7.5 },
+  calloutNote: { fontSize: 7.5, fontWeight: 400 },
   passes: { flexDirection: "row", flexWrap: "wrap", marginBottom: 5 },
   pass: { width: 62, borderWidth: 1, borderColor: INK, marginRight: 3, marginBottom: 3, padding: 3, alignItems: "center" },
   passLabel: { fontSize: 7, fontWeight: 700, textTransform: "uppercase" },
@@ -179,34 +179,36 @@ function Header({ data }: { data: TravelerData }) {
   return (
     <View style={s.header} fixed>
       <View style={s.headerRow}>
-        <View style={{ flex: 1 }}>
+        {/* Stacked lines of one paragraph each: this header is laid out again on every page. */}
+        <Text style={{ flex: 1 }}>
           <Text style={s.kicker}>Blockwright traveler · job</Text>
+          {"\n"}
           <Text style={s.jobNumber}>{job.number}</Text>
+          {"\n"}
           <Text style={s.customer}>{job.customer}</Text>
-        </View>
+        </Text>
         <View style={s.sideCell}>
-          <Text style={s.kicker}>Metering block</Text>
-          <Text style={s.side}>{block.side}</Text>
+          <Text>
+            <Text style={s.kicker}>Metering block</Text>
+            {"\n"}
+            <Text style={s.side}>{block.side}</Text>
+          </Text>
         </View>
         <View style={s.revisionBox}>
           <Text style={s.revision}>REVISION {revision.number}</Text>
           <Text style={s.revisionStatus}>{superseded ? "superseded" : revision.releasedAt ? "released" : "approved, not released"}</Text>
         </View>
       </View>
-      <View style={s.metaRow}>
-        <Text style={s.metaItem}>
-          <Text style={s.metaLabel}>Released </Text>
-          {revision.releasedAt ? `${isoDate(revision.releasedAt)} by ${revision.releasedBy ?? "—"}` : "not yet"}
-        </Text>
-        <Text style={s.metaItem}>
-          <Text style={s.metaLabel}>Approved </Text>
-          {isoDate(revision.approvedAt)} by {revision.approvedBy}
-        </Text>
-        <Text style={s.metaItem}>
-          <Text style={s.metaLabel}>Tuner </Text>
-          {revision.tuner}
-        </Text>
-      </View>
+      <Text style={s.metaRow}>
+        <Text style={s.metaLabel}>Released </Text>
+        {revision.releasedAt ? `${isoDate(revision.releasedAt)} by ${revision.releasedBy ?? "—"}` : "not yet"}
+        {"   ·   "}
+        <Text style={s.metaLabel}>Approved </Text>
+        {`${isoDate(revision.approvedAt)} by ${revision.approvedBy}`}
+        {"   ·   "}
+        <Text style={s.metaLabel}>Tuner </Text>
+        {revision.tuner}
+      </Text>
       {superseded ? (
         <View style={s.banner}>
           <Text style={s.bannerText}>SUPERSEDED — DO NOT USE</Text>
@@ -223,8 +225,11 @@ function Header({ data }: { data: TravelerData }) {
 function Fact({ label, children, width, figure = false }: { label: string; children: ReactNode; width: string; figure?: boolean }) {
   return (
     <View style={[s.fact, { width }]}>
-      <Text style={s.factLabel}>{label}</Text>
-      <Text style={figure ? s.factFigure : s.factValue}>{children}</Text>
+      <Text>
+        <Text style={s.factLabel}>{label}</Text>
+        {"\n"}
+        <Text style={figure ? s.factFigure : s.factValue}>{children}</Text>
+      </Text>
     </View>
   );
 }
@@ -301,10 +306,15 @@ function Callouts({ op }: { op: TravelerOperation }) {
       {op.callouts.map((c) => {
         const wordy = c.value.length > 16;
         return (
+          // One paragraph of three lines: each separate text costs the layout engine far more than a line.
           <View key={c.label} style={s.callout}>
-            <Text style={s.calloutLabel}>{c.label}</Text>
-            <Text style={wordy ? s.calloutText : s.calloutValue}>{c.value}</Text>
-            {c.detail ? <Text style={wordy ? { fontSize: 7.5 } : s.calloutDetail}>{c.detail}</Text> : null}
+            <Text>
+              <Text style={s.calloutLabel}>{c.label}</Text>
+              {"\n"}
+              <Text style={wordy ? s.calloutText : s.calloutValue}>{c.value}</Text>
+              {c.detail ? "\n" : null}
+              {c.detail ? <Text style={wordy ? s.calloutNote : s.calloutDetail}>{c.detail}</Text> : null}
+            </Text>
           </View>
         );
       })}
@@ -318,8 +328,11 @@ function GrindPasses({ op }: { op: TravelerOperation }) {
     <View style={s.passes}>
       {op.grindPasses.map((p) => (
         <View key={p.pass} style={s.pass} wrap={false}>
-          <Text style={s.passLabel}>Pass {p.pass}</Text>
-          <Text style={s.passDepth}>{measured("length", p.cumulativeDepthM).main}</Text>
+          <Text style={{ textAlign: "center" }}>
+            <Text style={s.passLabel}>Pass {p.pass}</Text>
+            {"\n"}
+            <Text style={s.passDepth}>{measured("length", p.cumulativeDepthM).main}</Text>
+          </Text>
           {p.clayCheck ? (
             <View style={s.passCheck}>
               <View style={s.tickBox} />
@@ -350,10 +363,11 @@ function Measurements({ op }: { op: TravelerOperation }) {
         return (
           <View key={m.key} style={s.tr} wrap={false}>
             <Text style={[s.colLabel, { fontWeight: 700 }]}>{m.label}</Text>
-            <View style={s.colPlan}>
-              <Text style={s.figure}>{planned.main}</Text>
-              <Text style={[s.figure, { fontSize: 7.5 }]}>{planned.other}</Text>
-            </View>
+            <Text style={[s.colPlan, s.figure]}>
+              {planned.main}
+              {"\n"}
+              <Text style={{ fontSize: 7.5 }}>{planned.other}</Text>
+            </Text>
             <Text style={[s.colAccept, s.figure]}>{acceptance(m.quantity, m.plannedSi, m.minSi, m.maxSi)}</Text>
             <View style={s.colMeasured}>
               <View style={s.writeIn}>
