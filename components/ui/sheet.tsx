@@ -13,7 +13,7 @@ export function Sheet({
   className?: string;
 }) {
   return (
-    <section className={`print-sheet rounded-[var(--radius-sheet)] border border-rule bg-sheet shadow-[0_1px_0_var(--color-rule)] ${className}`}>
+    <section aria-label={typeof title === "string" ? title : undefined} className={`print-sheet rounded-[var(--radius-sheet)] border border-rule bg-sheet shadow-[0_1px_0_var(--color-rule)] ${className}`}>
       {title || actions ? (
         <header className="flex flex-wrap items-center justify-between gap-3 border-b border-rule px-5 py-3">
           {title ? <h2 className="text-base font-semibold">{title}</h2> : <span />}

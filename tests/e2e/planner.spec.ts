@@ -94,6 +94,12 @@ test("a tuner plans, approves and releases a job; the machinist reads it; an edi
   await expect(job.state()).toHaveText("released");
   await expect(job.revisionRow(1)).toContainText("current");
 
+  // The released revision's travelers download from the job page, one per block.
+  await page.reload();
+  const travelers = page.getByRole("region", { name: "Travelers, revision 1" });
+  const [download] = await Promise.all([page.waitForEvent("download"), travelers.getByRole("button", { name: "Letter PDF" }).first().click()]);
+  expect(download.suggestedFilename()).toMatch(/^BW-\d{4}-primary-rev1\.pdf$/);
+
   // Revision 1 as approved: the chosen layout and the primary main jets, to compare later.
   await page.goto(`/jobs/${jobId}/revisions/1`);
   await expect(page.getByTestId("superseded-banner")).toHaveCount(0);

@@ -16,6 +16,7 @@ import { EngineSummary } from "./_plan/engine-summary";
 import { PlanView } from "./_plan/plan-view";
 import { changeStateAction, chooseLayoutAction } from "./actions";
 import { RevisionsPanel } from "./revisions-panel";
+import { TravelersPanel } from "./travelers-panel";
 import { StateControls } from "./state-controls";
 import { officeIdleNote, officeMoves } from "./state-moves";
 
@@ -100,7 +101,12 @@ export default async function JobPage({ params }: Params) {
         <Sheet title="Engine and fuel">
           <EngineSummary job={job} unit={unit} />
         </Sheet>
-        <RevisionsPanel jobId={job.id} revisions={record.revisions} />
+        <div className="flex flex-col gap-6">
+          <RevisionsPanel jobId={job.id} revisions={record.revisions} />
+          {job.currentRevision > 0 && record.blocks.length ? (
+            <TravelersPanel revision={job.currentRevision} blocks={record.blocks.map((b) => ({ id: b.id, side: b.side }))} />
+          ) : null}
+        </div>
       </div>
       <section aria-labelledby="plan-heading" className="flex flex-col gap-4">
         <div className="flex flex-wrap items-baseline justify-between gap-2 border-b-2 border-ink pb-2">
