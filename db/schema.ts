@@ -98,6 +98,14 @@ export const jobs = pgTable(
     /** Measured charge temperature; when null it is estimated from the compressor and intercooler. */
     chargeTemperatureK: doublePrecision("charge_temperature_k"),
     ambientTemperatureK: doublePrecision("ambient_temperature_k").notNull().default(298.15),
+    /** Ambient (barometric) pressure, absolute: the calibration point; gauge pressures are relative to it. */
+    ambientPressurePa: doublePrecision("ambient_pressure_pa").notNull().default(101325),
+    /** Site elevation when the ambient pressure was derived from it (ISO 2533); null when a barometer was read. */
+    siteElevationM: doublePrecision("site_elevation_m"),
+    /** Lambda wanted at cruise, under vacuum (common practice: about 1.0). */
+    cruiseLambda: doublePrecision("cruise_lambda").notNull().default(1),
+    /** Which drills the plan may mix: inch sizes (number, letter, fraction), metric, or both. */
+    drillSystem: text("drill_system", { enum: ["inch", "metric", "mixed"] }).notNull().default("inch"),
     compressorEfficiency: doublePrecision("compressor_efficiency").notNull().default(0.7),
     intercoolerEffectiveness: doublePrecision("intercooler_effectiveness").notNull().default(0.7),
     /** Solve with every standard drill instead of the shop's rack. */
@@ -149,6 +157,7 @@ export const meteringBlocks = pgTable(
 export type MeteringBlock = typeof meteringBlocks.$inferSelect;
 
 export const VALVE_KINDS = ["vacuum", "boost"] as const;
+export const THROTTLE_MODES = ["part", "full"] as const;
 export const ENRICHMENT_TARGET_KINDS = ["afr", "lambda", "percentMainJet", "area"] as const;
 export type EnrichmentTargetKind = (typeof ENRICHMENT_TARGET_KINDS)[number];
 
@@ -165,6 +174,8 @@ export const enrichmentStages = pgTable("enrichment_stages", {
   setpointPa: doublePrecision("setpoint_pa"),
   /** The tuner's terms: AFR or lambda from -> to, percent of main-jet area, or an area in m². */
   targetKind: text("target_kind", { enum: ENRICHMENT_TARGET_KINDS }).notNull(),
+  /** The throttle mode the mixture target is read in: part (primary side alone) or full (both sides). */
+  mode: text("mode", { enum: THROTTLE_MODES }).notNull().default("full"),
   targetFrom: doublePrecision("target_from"),
   targetTo: doublePrecision("target_to").notNull(),
   /** The valve's own flow window, in series with the holes. */
@@ -196,6 +207,8 @@ export const planRevisions = pgTable(
     releasedById: uuid("released_by_id").references(() => users.id),
     releasedAt: timestamp("released_at", { withTimezone: true }),
     supersededAt: timestamp("superseded_at", { withTimezone: true }),
+    /** Danger warnings the approver acknowledged explicitly ({ code, message }[]); empty when there were none. */
+    acknowledgedWarnings: jsonb("acknowledged_warnings").notNull().default(sql`'[]'::jsonb`),
   },
   (t) => [unique("plan_revisions_job_number").on(t.jobId, t.number)],
 );
@@ -274,3 +287,16 @@ export const stockedDrills = pgTable("stocked_drills", {
   label: text("label").primaryKey(),
   addedAt: timestamp("added_at", { withTimezone: true }).notNull().defaultNow(),
 });
+
+/**
+ * The shop's own limits, one row (id 1). Null columns take the defaults of lib/engineering (the smallest and
+ * largest restriction drill the shop will put in a channel, the least web of metal between holes).
+ */
+export const shopSettings = pgTable("shop_settings", {
+  id: integer("id").primaryKey().default(1),
+  minRestrictionDrillLabel: text("min_restriction_drill_label"),
+  maxRestrictionDrillLabel: text("max_restriction_drill_label"),
+  minWebM: doublePrecision("min_web_m"),
+  updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+});
+export type ShopSettings = typeof shopSettings.$inferSelect;
