@@ -150,6 +150,9 @@ export const meteringBlocks = pgTable(
     tubeBendDeg: doublePrecision("tube_bend_deg"),
     tubeBendRadiusM: doublePrecision("tube_bend_radius_m"),
     tubeSwageM: doublePrecision("tube_swage_m"),
+    /** Room the bowl leaves for the tube from the inlet tip: rearward and down (null: not measured). */
+    tubeMaxRearwardM: doublePrecision("tube_max_rearward_m"),
+    tubeMaxDownwardM: doublePrecision("tube_max_downward_m"),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [unique("metering_blocks_job_side").on(t.jobId, t.side)],
