@@ -24,6 +24,8 @@ interface Row {
   needed: number;
   supplied: number;
   ratio: number;
+  mixture: number;
+  target: number;
 }
 
 function pressureText(psi: number): string {
@@ -49,6 +51,9 @@ function ChartTooltip({ active, payload, unit }: { active?: boolean; payload?: {
       </p>
       <p className="numeric">
         supplied {fixed(row.supplied, decimals)} {areaUnitLabel(unit)}
+      </p>
+      <p className="numeric">
+        mixture {fixed(row.mixture, 3)} · target {fixed(row.target, 3)}
       </p>
       <p className="numeric font-semibold">{mixtureText(row.ratio)}</p>
     </div>
@@ -89,12 +94,16 @@ function valveLabel(valve: StagingValveDto, row: number) {
  * shaded, rich zones shaded lighter, each power valve's opening marked and labelled.
  */
 export function StagingChart({ chart, mode, unit }: { chart: StagingChartDto; mode: ThrottleMode; unit: DisplayLengthUnit }) {
-  const rows: Row[] = chart.points.map((p) => ({
-    psi: p.psi,
-    needed: areaValue(p[mode].needed, unit),
-    supplied: areaValue(p[mode].supplied, unit),
-    ratio: p[mode].ratio,
-  }));
+  const rows: Row[] = chart.points
+    .filter((p) => mode === "part" || p.psi >= chart.fullFromPsi)
+    .map((p) => ({
+      psi: p.psi,
+      needed: areaValue(p[mode].needed, unit),
+      supplied: areaValue(p[mode].supplied, unit),
+      ratio: p[mode].ratio,
+      mixture: p[mode].mixture,
+      target: p.target,
+    }));
   const zones = chart.zones.filter((z) => z.mode === mode);
   const valves = chart.valves.filter((v) => mode === "full" || v.side === "primary").sort((a, b) => a.openingPsi - b.openingPsi);
   const values = rows.flatMap((r) => [r.needed, r.supplied]);

@@ -23,6 +23,8 @@ export function engineInputOf(job: Job): EngineInput {
   return {
     fuel: fuelProperties(fuelSpecOf(job)),
     peakBoostPa: job.peakBoostPa,
+    ambientPressurePa: job.ambientPressurePa,
+    cruiseLambda: job.cruiseLambda,
     targetLambdaAtmosphere: job.targetLambdaAtmosphere,
     targetLambdaPeak: job.targetLambdaPeak,
     ambientTemperatureK: job.ambientTemperatureK,
@@ -68,7 +70,13 @@ export function blockInputOf(block: BlockRow): BlockInput {
         }
       : undefined,
     tube: hasTube
-      ? { runsM: block.tubeRunsM ?? [], bendDeg: block.tubeBendDeg ?? 0, bendRadiusM: block.tubeBendRadiusM!, swageM: block.tubeSwageM! }
+      ? {
+          runsM: block.tubeRunsM ?? [],
+          bendDeg: block.tubeBendDeg ?? 0,
+          bendRadiusM: block.tubeBendRadiusM!,
+          swageM: block.tubeSwageM!,
+          maxReach: { rearwardM: orUndefined(block.tubeMaxRearwardM), downwardM: orUndefined(block.tubeMaxDownwardM) },
+        }
       : undefined,
     stages: block.stages.map((stage) => ({
       id: stage.id,
@@ -77,6 +85,7 @@ export function blockInputOf(block: BlockRow): BlockInput {
           ? { kind: "vacuum" as const, ratingPa: stage.vacuumRatingPa ?? 0 }
           : { kind: "boost" as const, setpointPa: stage.setpointPa ?? 0 },
       target: targetOf(stage),
+      mode: stage.mode,
       valveWindowAreaM2: orUndefined(stage.valveWindowAreaM2),
       maxHoles: stage.maxHoles,
       chosen: stage.chosenCount !== null && stage.chosenDrillLabel !== null ? { count: stage.chosenCount, drillLabel: stage.chosenDrillLabel } : undefined,

@@ -29,9 +29,11 @@ export interface StagingValveDto {
 
 export interface StagingPointDto {
   psi: number;
-  part: { needed: AreaPair; supplied: AreaPair; ratio: number };
-  full: { needed: AreaPair; supplied: AreaPair; ratio: number };
-  targetAfr: number;
+  /** Mixture the carburetor gives (predicted) beside what the area shows; in the target's scale. */
+  part: { needed: AreaPair; supplied: AreaPair; ratio: number; mixture: number };
+  full: { needed: AreaPair; supplied: AreaPair; ratio: number; mixture: number };
+  /** The target mixture there, AFR or lambda as the model was given. */
+  target: number;
 }
 
 export interface StagingZoneDto {
@@ -48,6 +50,8 @@ export interface StagingChartDto {
   toPsi: number;
   /** Half-width of the accepted band, percent. */
   bandPct: number;
+  /** Full throttle is drawn from here up: a deeper vacuum only happens at part throttle. */
+  fullFromPsi: number;
   points: StagingPointDto[];
   zones: StagingZoneDto[];
   valves: StagingValveDto[];
@@ -85,7 +89,7 @@ function marksOf(model: StagingModel): Map<string, string> {
 
 export function stagingChartData(
   model: StagingModel,
-  options: { fromGaugePa: number; toGaugePa: number; band: number; points?: number },
+  options: { fromGaugePa: number; toGaugePa: number; band: number; points?: number; fullThrottleFromGaugePa?: number | undefined },
 ): StagingChartDto {
   const sweep = sweepStaging(model, { ...options, points: options.points ?? 161 });
   const psi = sweep.gaugePa.map(psiOf);
@@ -94,12 +98,14 @@ export function stagingChartData(
     needed: areaPair(sweep[mode].neededM2[i] as number),
     supplied: areaPair(sweep[mode].suppliedM2[i] as number),
     ratio: tidy(sweep[mode].ratio[i] as number, 5),
+    mixture: tidy(sweep[mode].afr[i] as number, 4),
   });
   return {
     fromPsi: psi[0] as number,
     toPsi: psi.at(-1) as number,
     bandPct: tidy(options.band * 100, 3),
-    points: psi.map((p, i) => ({ psi: p, part: curve("part", i), full: curve("full", i), targetAfr: tidy(sweep.targetAfr[i] as number, 4) })),
+    fullFromPsi: options.fullThrottleFromGaugePa === undefined ? (psi[0] as number) : Math.max(psi[0] as number, psiOf(options.fullThrottleFromGaugePa)),
+    points: psi.map((p, i) => ({ psi: p, part: curve("part", i), full: curve("full", i), target: tidy(sweep.targetAfr[i] as number, 4) })),
     zones: sweep.zones.map((zone) => {
       // A zone lasts until the next point of the sweep, unless its last point is where a vacuum valve opens:
       // the valve is still shut there and open just above, so the zone ends exactly at the rating.

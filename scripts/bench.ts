@@ -47,6 +47,8 @@ const TRAVELER_PLAN = planConversion({
   engine: {
     fuel: GASOLINE,
     peakBoostPa: 10 * PA_PER_PSI,
+    ambientPressurePa: 101325, // ISO 2533 sea-level standard atmosphere
+    cruiseLambda: 1.0, // common practice, no published source
     targetLambdaAtmosphere: 0.88,
     targetLambdaPeak: 0.78,
     ambientTemperatureK: 298.15,

@@ -16,9 +16,11 @@
 //   where base is the area that gave the target at the reference (the calibration: by default the
 //   supplied area at zero gauge, i.e. the carburetor is assumed correctly jetted without boost).
 // * rho(p) is the air density at the venturi. The venturi sits upstream of the throttle plates, so under
-//   vacuum it still sees the ambient (the compressor is not building boost) and only under boost does it
-//   see the manifold pressure: P_venturi = P_ambient + max(gauge, 0). The temperature there is either fixed
-//   or the compressor outlet (isentropic with an efficiency) after an optional intercooler.
+//   vacuum it still sees the ambient air (the compressor is not building boost) and only under boost does it
+//   see the manifold pressure: P_venturi = P_ambient + max(gauge, 0). Under boost the temperature there is
+//   either fixed or the compressor outlet (isentropic with an efficiency) after an optional intercooler; at
+//   and below zero gauge it is the ambient temperature. The reference (where the jets were right) is the
+//   ambient air, so a hot charge or a shop at altitude changes what boost needs.
 // * mixture ratio = supplied / needed: above 1 is rich, below 1 lean. The mixture's AFR is AFR_target / ratio.
 // * Only ratios of AFR enter, so lambda values work in place of AFR throughout.
 
@@ -58,14 +60,14 @@ export type JetBank = number | { count: number; areaM2: number };
 
 /**
  * Target mixture against gauge pressure: atmosphereAfr at zero gauge, peakBoostAfr from peakBoostGaugePa
- * up, linear between; under vacuum atmosphereAfr, or cruiseAfr below cruiseBelowGaugePa when both are given.
+ * up, linear between; under vacuum atmosphereAfr, or cruiseAfr at and below cruiseBelowGaugePa when both are given.
  */
 export interface TargetAfrCurve {
   atmosphereAfr: number;
   peakBoostAfr: number;
   peakBoostGaugePa: number;
   cruiseAfr?: number | undefined;
-  /** Gauge pressure (negative, a vacuum) below which the cruise target applies. */
+  /** Gauge pressure (zero or negative, a vacuum) at and below which the cruise target applies. */
   cruiseBelowGaugePa?: number | undefined;
 }
 
@@ -90,8 +92,8 @@ export interface StagingModel {
   /** Ambient (compressor inlet) pressure, absolute Pa, and temperature, K. Gauge pressures are relative to it. */
   ambient: { pressurePa: number; temperatureK: number };
   /**
-   * Air at the venturi when the base calibration was right (absolute Pa, K). Default: the model's own
-   * venturi conditions at zero gauge.
+   * Air at the venturi when the base calibration was right (absolute Pa, K). Default: the ambient air, where
+   * the carburetor was jetted.
    */
   reference?: { pressurePa: number; temperatureK: number } | undefined;
   target: TargetMixture;
@@ -133,7 +135,8 @@ export function targetAfrAt(target: TargetMixture, gaugePa: number): number {
   if (gaugePa >= 0) {
     return target.atmosphereAfr + ((target.peakBoostAfr - target.atmosphereAfr) * gaugePa) / target.peakBoostGaugePa;
   }
-  if (target.cruiseAfr !== undefined && target.cruiseBelowGaugePa !== undefined && gaugePa < target.cruiseBelowGaugePa) {
+  // At the cruise limit itself a vacuum valve rated there is still shut: the engine is still cruising.
+  if (target.cruiseAfr !== undefined && target.cruiseBelowGaugePa !== undefined && gaugePa <= target.cruiseBelowGaugePa) {
     return target.cruiseAfr;
   }
   return target.atmosphereAfr;
@@ -148,8 +151,8 @@ function validateTarget(target: TargetMixture): void {
     throw new RangeError("target.cruiseAfr and target.cruiseBelowGaugePa go together");
   }
   if (target.cruiseAfr !== undefined) requirePositive("target.cruiseAfr", target.cruiseAfr);
-  if (target.cruiseBelowGaugePa !== undefined && !(target.cruiseBelowGaugePa < 0)) {
-    throw new RangeError("target.cruiseBelowGaugePa must be a vacuum (negative gauge pressure)");
+  if (target.cruiseBelowGaugePa !== undefined && !(target.cruiseBelowGaugePa <= 0)) {
+    throw new RangeError("target.cruiseBelowGaugePa must be a vacuum (zero or negative gauge pressure)");
   }
 }
 
@@ -165,7 +168,11 @@ export function venturiAirAt(model: StagingModel, gaugePa: number): VenturiAir {
   const absolutePressurePa = ambientPa + Math.max(gaugePa, 0);
   let temperatureK: number;
   const charge = model.charge;
-  if (charge.kind === "fixed") {
+  if (gaugePa <= 0) {
+    // No boost: the compressor does no work and the venturi breathes ambient air, whatever the charge
+    // reaches under boost.
+    temperatureK = model.ambient.temperatureK;
+  } else if (charge.kind === "fixed") {
     temperatureK = charge.temperatureK;
   } else {
     temperatureK = compressorOutletTemperature({
@@ -220,13 +227,18 @@ function sideCounts(mode: ThrottleMode, side: CarburetorSide): boolean {
   return mode === "full" || side === "primary";
 }
 
-function mainsArea(model: StagingModel, mode: ThrottleMode): number {
+function mainsArea(model: Pick<StagingModel, "mainJets">, mode: ThrottleMode): number {
   const primary = jetBankArea(model.mainJets.primary);
   return mode === "part" ? primary : primary + jetBankArea(model.mainJets.secondary);
 }
 
 /** Total metering area (mains + open valves) at a gauge pressure, m². justBelow: the left-limit state. */
-export function suppliedAreaAt(model: StagingModel, gaugePa: number, mode: ThrottleMode, justBelow = false): number {
+export function suppliedAreaAt(
+  model: Pick<StagingModel, "mainJets" | "valves">,
+  gaugePa: number,
+  mode: ThrottleMode,
+  justBelow = false,
+): number {
   let area = mainsArea(model, mode);
   for (const v of model.valves) {
     if (!sideCounts(mode, v.side)) continue;
@@ -259,6 +271,20 @@ function demandFactor(model: StagingModel, cal: Calibration, gaugePa: number): n
   return Math.sqrt(air.densityKgM3 / cal.referenceDensity) * (cal.referenceAfr / targetAfrAt(model.target, gaugePa));
 }
 
+/**
+ * The mixture (lambda, or AFR when the target is AFR) the carburetor gives at a gauge pressure with a given
+ * metering area open: the calibration's mixture, leaned by sqrt(rho/rho_ref), richened by the area added
+ * since the calibration. Independent of the target curve away from zero gauge.
+ */
+export function predictedMixtureAt(model: StagingModel, gaugePa: number, mode: ThrottleMode, suppliedAreaM2: number): number {
+  validateModel(model);
+  requirePositive("supplied area", suppliedAreaM2);
+  const cal = calibrationOf(model);
+  const air = venturiAirAt(model, gaugePa);
+  const base = mode === "part" ? cal.basePart : cal.baseFull;
+  return cal.referenceAfr * Math.sqrt(air.densityKgM3 / cal.referenceDensity) * (base / suppliedAreaM2);
+}
+
 /** Area the target mixture needs at a gauge pressure, m². */
 export function neededAreaAt(model: StagingModel, gaugePa: number, mode: ThrottleMode): number {
   validateModel(model);
@@ -278,6 +304,11 @@ export interface StagingSweepOptions {
   points: number;
   /** Half-width of the acceptable mixture band as a fraction: 0.05 accepts ratios 0.95 to 1.05. */
   band: number;
+  /**
+   * Lowest gauge pressure at which the engine can be at full throttle (default: the whole range). Deeper
+   * vacuum only happens at part throttle, so full-throttle zones are not reported below it.
+   */
+  fullThrottleFromGaugePa?: number | undefined;
 }
 
 export interface MixtureCurve {
@@ -362,7 +393,10 @@ export function sweepStaging(model: StagingModel, options: StagingSweepOptions):
       curve.afr.push(afrTarget / ratio);
     }
   }
-  for (const mode of ["part", "full"] as const) result.zones.push(...zonesOf(mode, gaugePa, result[mode].ratio, band));
+  const fullFrom = options.fullThrottleFromGaugePa ?? -Infinity;
+  result.zones.push(...zonesOf("part", gaugePa, result.part.ratio, band));
+  const fullStart = gaugePa.findIndex((p) => p >= fullFrom);
+  if (fullStart !== -1) result.zones.push(...zonesOf("full", gaugePa.slice(fullStart), result.full.ratio.slice(fullStart), band));
   return result;
 }
 

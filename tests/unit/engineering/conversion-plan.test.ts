@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { extraFuelFraction, planConversion, type BlockInput, type EngineInput } from "@/lib/engineering/conversion-plan";
+import { planConversion, type BlockInput, type EngineInput } from "@/lib/engineering/conversion-plan";
+import { extraFuelForMixtureChange } from "@/lib/engineering/stage-sizing";
 import { ALL_DRILLS, drillsFromLabels } from "@/lib/engineering/drills";
 import { GASOLINE } from "@/lib/engineering/fuels";
 
@@ -11,6 +12,8 @@ const INHG = 3386.389; // NIST SP 811: 1 inHg (conventional) = 3386.389 Pa
 const engine: EngineInput = {
   fuel: GASOLINE,
   peakBoostPa: 10 * PSI,
+  ambientPressurePa: 101325, // ISO 2533 sea-level standard atmosphere
+  cruiseLambda: 1.0, // common practice, no published source
   targetLambdaAtmosphere: 0.88,
   targetLambdaPeak: 0.78,
   ambientTemperatureK: 298.15,
@@ -46,13 +49,13 @@ const secondary: BlockInput = {
 
 describe("extra fuel from the tuner's terms", () => {
   it("takes an AFR change: 12.5 -> 11.5 needs 12.5 / 11.5 - 1 = 8.70 % more fuel", () => {
-    expect(extraFuelFraction({ kind: "afr", from: 12.5, to: 11.5 }, 1)).toBeCloseTo(0.086957, 5);
+    expect(extraFuelForMixtureChange(12.5, 11.5)).toBeCloseTo(0.086957, 5);
   });
   it("takes a lambda change: 0.85 -> 0.78 needs 0.85 / 0.78 - 1 = 8.97 % more fuel", () => {
-    expect(extraFuelFraction({ kind: "lambda", from: 0.85, to: 0.78 }, 1)).toBeCloseTo(0.089744, 5);
+    expect(extraFuelForMixtureChange(0.85, 0.78)).toBeCloseTo(0.089744, 5);
   });
-  it("takes a percent of main-jet area", () => {
-    expect(extraFuelFraction({ kind: "percentMainJet", percent: 31.5 }, 1)).toBeCloseTo(0.315, 10);
+  it("refuses a change that leans the mixture", () => {
+    expect(() => extraFuelForMixtureChange(0.78, 0.85)).toThrow(RangeError);
   });
 });
 
@@ -114,7 +117,7 @@ describe("planConversion", () => {
       drills: drillsFromLabels(["#52", "#43", "1/16"]),
     });
     expect(stale.blocks[0]!.stages[0]!.chosenBy).toBe("solver");
-    expect(stale.blocks[0]!.warnings.join(" ")).toMatch(/no longer offered/);
+    expect(stale.blocks[0]!.warnings.map((w) => w.message).join(" ")).toMatch(/no longer offered/);
   });
 
   it("draws the staging of the whole carburetor from vacuum to peak boost", () => {

@@ -12,6 +12,8 @@ const INHG = 3386.389; // NIST SP 811
 const engine: EngineInput = {
   fuel: GASOLINE,
   peakBoostPa: 10 * PSI,
+  ambientPressurePa: 101325, // ISO 2533 sea-level standard atmosphere
+  cruiseLambda: 1.0, // common practice, no published source
   targetLambdaAtmosphere: 0.88,
   targetLambdaPeak: 0.78,
   ambientTemperatureK: 298.15,

@@ -116,7 +116,7 @@ export default async function JobPage({ params }: Params) {
           {shown ? <p className="text-sm text-graphite">{shown.source}</p> : null}
         </div>
         {shown ? (
-          <PlanView job={shown.job} blocks={shown.blocks} plan={shown.plan} unit={unit} choose={choose} />
+          <PlanView blocks={shown.blocks} plan={shown.plan} unit={unit} choose={choose} />
         ) : record.blocks.length ? (
           <>
             <p role="alert" className="rounded-[var(--radius-sheet)] border border-fault bg-fault-soft px-3 py-2 text-sm text-fault">

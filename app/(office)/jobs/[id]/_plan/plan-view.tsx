@@ -1,6 +1,5 @@
 import "server-only";
 import type { BlockRow } from "@/db/jobs";
-import type { Job } from "@/db/schema";
 import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
 import type { DisplayLengthUnit } from "@/lib/display";
 import { Sheet } from "@/components/ui/sheet";
@@ -20,13 +19,11 @@ const SIDE_TITLE = { primary: "Primary metering block", secondary: "Secondary me
  * bench work with its safety notes. Read-only unless `choose` is given.
  */
 export function PlanView({
-  job,
   blocks,
   plan,
   unit,
   choose,
 }: {
-  job: Job;
   blocks: BlockRow[];
   plan: ConversionPlan;
   unit: DisplayLengthUnit;
@@ -59,7 +56,7 @@ export function PlanView({
         );
       })}
       <Sheet title="Fuel curve across manifold pressure">
-        <StagingPanel job={job} plan={plan} blocks={blocks} unit={unit} />
+        <StagingPanel plan={plan} blocks={blocks} unit={unit} />
       </Sheet>
       <Sheet title="Bench work">
         <div className="flex flex-col gap-6">

@@ -1,13 +1,21 @@
 import "server-only";
 import type { StageRow } from "@/db/jobs";
-import type { StagePlan } from "@/lib/engineering/conversion-plan";
+import type { SolvedStage } from "@/lib/engineering/conversion-plan";
 import type { DisplayLengthUnit } from "@/lib/display";
 import type { FormResult } from "@/lib/form-action";
 import { Tag } from "@/components/ui/sheet";
 import { Table, Td, Th } from "@/components/ui/table";
 import { areaBoth, drillSize, signedPercent } from "./format";
+import { PlanWarningItem } from "./plan-warnings";
 import { UseLayoutButton } from "./use-layout-button";
 import { targetText, valveText } from "./stage-terms";
+
+const MODE_TEXT = { part: "part throttle (primary side alone)", full: "full throttle (both sides)" } as const;
+const BASIS_TEXT = {
+  engine: (mode: "part" | "full", area: string) => `Sized on the whole engine: all the metering area open in ${MODE_TEXT[mode]} just below its opening, ${area}.`,
+  block: (_mode: "part" | "full", area: string) => `A per-block figure: a percent of this block's own main jets, ${area}; the other side is not counted.`,
+  area: () => "An area given directly.",
+} as const;
 
 export type ChooseLayout = (previous: FormResult | undefined, formData: FormData) => Promise<FormResult>;
 
@@ -27,7 +35,7 @@ export function StagePlanView({
   /** The valve's mark on the staging chart: P1, S2 … */
   mark: string;
   stage: StageRow;
-  plan: StagePlan;
+  plan: SolvedStage;
   unit: DisplayLengthUnit;
   choose?: ChooseLayout | undefined;
 }) {
@@ -45,6 +53,14 @@ export function StagePlanView({
         </p>
         <p className="text-sm" data-testid="stage-target-area">
           needs <span className="numeric font-semibold">{target.first}</span> <span className="numeric text-graphite">· {target.second}</span>
+        </p>
+        <p className="text-sm text-graphite sm:col-span-3" data-testid="stage-basis">
+          {BASIS_TEXT[plan.basis](plan.mode, areaBoth(plan.basisAreaM2, unit).first)} Predicted lambda{" "}
+          <span className="numeric">{plan.beforeLambda.toFixed(3)}</span> before it opens,{" "}
+          <span className="numeric font-semibold" data-testid="stage-achieved-lambda">
+            {plan.achievedLambda.toFixed(3)}
+          </span>{" "}
+          after, against <span className="numeric">{plan.targetLambda.toFixed(3)}</span>.
         </p>
       </header>
       <Table aria-label={`Hole layouts for stage ${index + 1}`}>
@@ -97,9 +113,9 @@ export function StagePlanView({
         {plan.chosenBy === "tuner" ? ", picked by the tuner." : ", the solver's closest layout."}
       </p>
       {plan.warnings.length ? (
-        <ul className="list-disc pl-5 text-sm text-fault">
-          {plan.warnings.map((w) => (
-            <li key={w}>{w}</li>
+        <ul className="flex flex-col gap-1 text-sm">
+          {plan.warnings.map((w, i) => (
+            <PlanWarningItem key={`${w.code}-${i}`} warning={w} />
           ))}
         </ul>
       ) : null}

@@ -1,15 +1,7 @@
 import "server-only";
 import type { BlockRow } from "@/db/jobs";
-import type { Job } from "@/db/schema";
-import { STAGING_BAND, STAGING_CHART_VACUUM_PA, stagingModelFor, type ConversionPlan } from "@/lib/engineering/conversion-plan";
-import type { StagingModel } from "@/lib/engineering/staging";
-import { blockInputOf, engineInputOf } from "@/lib/job-plan";
+import { STAGING_BAND, STAGING_CHART_VACUUM_PA, STAGING_SWEEP_POINTS, type ConversionPlan } from "@/lib/engineering/conversion-plan";
 import { stagingChartData, type StagingChartDto } from "@/lib/staging-chart";
-
-/** The staging model of a solved job: its engine, its blocks and the layouts the plan chose. */
-export function jobStagingModel(job: Job, blocks: readonly BlockRow[], plan: ConversionPlan): StagingModel {
-  return stagingModelFor(engineInputOf(job), blocks.map(blockInputOf), plan.blocks);
-}
 
 /** Short marks for the valves: P1, P2 … on the primary, S1 … on the secondary, in opening order per block. */
 export function valveMarks(blocks: readonly BlockRow[]): Map<string, string> {
@@ -18,14 +10,16 @@ export function valveMarks(blocks: readonly BlockRow[]): Map<string, string> {
   return marks;
 }
 
-/** The chart of the job's fuel curve, on the same grid and band as the plan's own warnings. */
-export function jobStagingChart(job: Job, blocks: readonly BlockRow[], plan: ConversionPlan): StagingChartDto {
-  const chart = stagingChartData(jobStagingModel(job, blocks, plan), {
+/** The chart of the plan's fuel curve, on the same model, grid and band as the plan's own warnings. */
+export function jobStagingChart(blocks: readonly BlockRow[], plan: ConversionPlan): StagingChartDto {
+  const { model, fullThrottleFromGaugePa } = plan.staging;
+  const target = model.target as { peakBoostGaugePa: number };
+  const chart = stagingChartData(model, {
     fromGaugePa: -STAGING_CHART_VACUUM_PA,
-    toGaugePa: job.peakBoostPa,
+    toGaugePa: target.peakBoostGaugePa,
     band: STAGING_BAND,
-    // The grid planConversion sweeps, so that the shaded zones match the plan's warnings.
-    points: 61,
+    points: STAGING_SWEEP_POINTS,
+    fullThrottleFromGaugePa,
   });
   const marks = valveMarks(blocks);
   return { ...chart, valves: chart.valves.map((v) => ({ ...v, mark: marks.get(v.id) ?? v.mark })) };

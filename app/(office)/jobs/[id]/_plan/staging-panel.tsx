@@ -1,6 +1,5 @@
 import "server-only";
 import type { BlockRow } from "@/db/jobs";
-import type { Job } from "@/db/schema";
 import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
 import type { DisplayLengthUnit } from "@/lib/display";
 import { StagingChart, StagingChartKey } from "@/components/staging-chart";
@@ -8,8 +7,8 @@ import { BalanceTable } from "./balance-table";
 import { jobStagingChart, valveMarks } from "./staging-dto";
 
 /** The fuel curve of the whole carburetor: part and full throttle, and the balance between the sides. */
-export function StagingPanel({ job, plan, blocks, unit }: { job: Job; plan: ConversionPlan; blocks: readonly BlockRow[]; unit: DisplayLengthUnit }) {
-  const chart = jobStagingChart(job, blocks, plan);
+export function StagingPanel({ plan, blocks, unit }: { plan: ConversionPlan; blocks: readonly BlockRow[]; unit: DisplayLengthUnit }) {
+  const chart = jobStagingChart(blocks, plan);
   const { balance } = plan.staging;
   return (
     <div className="flex flex-col gap-5">

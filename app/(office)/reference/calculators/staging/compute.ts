@@ -8,7 +8,7 @@ import { fromSI, PA_PER_INHG, STANDARD_ATMOSPHERE_PA, toSI } from "@/lib/enginee
 import { RequestRefusal } from "@/lib/errors";
 import { stagingBalanceData, stagingChartData, type StagingBalanceDto, type StagingChartDto } from "@/lib/staging-chart";
 import { refuseOutOfRange } from "../refusal";
-import { chargeModelFromPeak } from "./charge-temperature";
+import { chargeModelFromPeak } from "@/lib/engineering/charge-temperature";
 import type { STAGING_FUELS, StagingInput } from "./schema";
 
 /** The chart starts at 20 inHg of vacuum (about idle), or 4 inHg below the deepest vacuum-valve rating. */

@@ -3,7 +3,6 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { getJob } from "@/db/jobs";
 import { getRevisionSnapshot } from "@/db/revisions";
-import type { Job } from "@/db/schema";
 import { ALL_ROLES, requireRole } from "@/lib/auth/session";
 import { parseIdParam } from "@/lib/route-params";
 import { PageHeader, Sheet, Tag } from "@/components/ui/sheet";
@@ -80,7 +79,7 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
           </dl>
         </Sheet>
       </div>
-      <PlanView job={snapshot.job as unknown as Job} blocks={snapshot.blocks} plan={snapshot.plan} unit={user.lengthUnit} />
+      <PlanView blocks={snapshot.blocks} plan={snapshot.plan} unit={user.lengthUnit} />
     </>
   );
 }

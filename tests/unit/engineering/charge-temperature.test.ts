@@ -1,9 +1,9 @@
 // The staging calculator's charge-temperature model: from the ambient at zero boost to the measured charge
 // temperature at peak boost, along the compressor's isentropic heating.
 import { describe, expect, it } from "vitest";
-import { chargeModelFromPeak } from "@/app/(office)/reference/calculators/staging/charge-temperature";
+import { chargeModelFromPeak } from "@/lib/engineering/charge-temperature";
 import { venturiAirAt, type StagingModel } from "@/lib/engineering/staging";
-import { PA_PER_PSI, PA_STANDARD_ATMOSPHERE } from "../engineering/nist-factors";
+import { PA_PER_PSI, PA_STANDARD_ATMOSPHERE } from "./nist-factors";
 
 const AMBIENT_K = 298.15; // 25 °C
 const PEAK = 10 * PA_PER_PSI;

@@ -1,5 +1,5 @@
-import { compressorOutletTemperature } from "@/lib/engineering/engine-demand";
-import type { ChargeTemperatureModel } from "@/lib/engineering/staging";
+import { compressorOutletTemperature } from "./engine-demand";
+import type { ChargeTemperatureModel } from "./staging";
 
 /**
  * Isentropic efficiency assumed for the compressor when the measured charge temperature is cooler than it
