@@ -4,6 +4,7 @@ import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
 import { canMove, type JobState } from "@/lib/job-states";
 import { planJob } from "@/lib/job-plan";
 import { RequestRefusal } from "@/lib/errors";
+import { dangerWarnings } from "@/lib/engineering/plan-warnings";
 import { recordAudit } from "./audit";
 import { getDb, type Executor } from "./client";
 import { listStockedDrills } from "./drill-stock";
@@ -40,13 +41,23 @@ export async function solveJob(jobId: string): Promise<ConversionPlan> {
  * Approves the working inputs as the next revision: solves them, keeps the snapshot, writes each block's
  * operations, marks the previous revision superseded and moves the job to planned. All or nothing.
  */
-export async function approveRevision(actor: Viewer, jobId: string): Promise<{ revision: number }> {
+export async function approveRevision(actor: Viewer, jobId: string, options: { acknowledgeWarnings?: boolean | undefined } = {}): Promise<{ revision: number }> {
   const stocked = await listStockedDrills();
   return getDb().transaction(async (tx) => {
     const job = await lockJob(tx, jobId);
     if (!canMove(job.state, "planned")) throw new RequestRefusal(409, `A ${job.state} job cannot be approved: edit it first.`, "to");
     const blocks = await loadBlocks(tx, jobId);
     const plan = planJob(job, blocks, stocked);
+    // A plan that may damage the engine is approved only with an explicit acknowledgement, kept with it.
+    const dangers = dangerWarnings(plan.warnings).map(({ code, level, message }) => ({ code, level, message }));
+    if (dangers.length && !options.acknowledgeWarnings) {
+      throw new RequestRefusal(
+        409,
+        `The plan has ${dangers.length} danger warning${dangers.length > 1 ? "s" : ""}: ${dangers.map((d) => d.message).join(" ")} Approve with an explicit acknowledgement, or change the plan.`,
+        "acknowledgeWarnings",
+        dangers,
+      );
+    }
     const number = job.currentRevision + 1;
     const now = new Date();
     await tx
@@ -56,7 +67,7 @@ export async function approveRevision(actor: Viewer, jobId: string): Promise<{ r
     const snapshot: RevisionSnapshot = { job: { ...job }, blocks, plan };
     const [revision] = await tx
       .insert(planRevisions)
-      .values({ jobId, number, snapshot: JSON.parse(JSON.stringify(snapshot)), approvedById: actor.id, approvedAt: now })
+      .values({ jobId, number, snapshot: JSON.parse(JSON.stringify(snapshot)), approvedById: actor.id, approvedAt: now, acknowledgedWarnings: dangers })
       .returning({ id: planRevisions.id });
     const rows = plan.blocks.flatMap((blockPlan) =>
       blockPlan.operations.map((op) => ({
@@ -73,7 +84,7 @@ export async function approveRevision(actor: Viewer, jobId: string): Promise<{ r
     );
     if (rows.length) await tx.insert(operations).values(rows);
     await tx.update(jobs).set({ state: "planned", currentRevision: number, updatedAt: now }).where(eq(jobs.id, jobId));
-    await recordAudit(tx, actor.id, "job.approve", jobId, { revision: number });
+    await recordAudit(tx, actor.id, "job.approve", jobId, { revision: number, ...(dangers.length ? { acknowledgedWarnings: dangers } : {}) });
     return { revision: number };
   });
 }
@@ -108,9 +119,14 @@ export async function currentRevisionComplete(
  * Moves the job to another state when the move is allowed: planned -> released stamps the revision's
  * release; draft -> planned approves a revision; verified needs a complete bench record.
  */
-export async function changeJobState(actor: Viewer, jobId: string, to: JobState): Promise<{ state: JobState; revision: number }> {
+export async function changeJobState(
+  actor: Viewer,
+  jobId: string,
+  to: JobState,
+  options: { acknowledgeWarnings?: boolean | undefined } = {},
+): Promise<{ state: JobState; revision: number }> {
   if (to === "planned") {
-    const { revision } = await approveRevision(actor, jobId);
+    const { revision } = await approveRevision(actor, jobId, options);
     return { state: "planned", revision };
   }
   return getDb().transaction(async (tx) => {

@@ -6,7 +6,13 @@ import { RequestRefusal } from "@/lib/errors";
 export type ApiErrorCode = "invalid_input" | "unauthenticated" | "forbidden" | "not_found" | "conflict" | "internal";
 
 export interface ApiError {
-  error: { code: ApiErrorCode; message: string; field?: string; issues?: { field: string; message: string }[] };
+  error: {
+    code: ApiErrorCode;
+    message: string;
+    field?: string;
+    issues?: { field: string; message: string }[];
+    warnings?: readonly { code: string; level: string; message: string }[];
+  };
 }
 
 export function apiError(status: number, code: ApiErrorCode, message: string, extra: Partial<ApiError["error"]> = {}) {
@@ -38,7 +44,10 @@ export function refusalResponse(error: unknown) {
   if (error instanceof RequestRefusal) {
     const code: ApiErrorCode =
       error.status === 404 ? "not_found" : error.status === 409 ? "conflict" : error.status === 403 ? "forbidden" : "invalid_input";
-    return apiError(error.status, code, error.field ? `${error.field}: ${error.message}` : error.message, { field: error.field });
+    return apiError(error.status, code, error.field ? `${error.field}: ${error.message}` : error.message, {
+      field: error.field,
+      ...(error.warnings ? { warnings: error.warnings } : {}),
+    });
   }
   console.error(error);
   return apiError(500, "internal", "Something went wrong on the server.");

@@ -7,6 +7,8 @@ export class RequestRefusal extends Error {
     readonly status: 400 | 403 | 404 | 409,
     message: string,
     readonly field?: string,
+    /** Typed detail the caller can act on, e.g. the warnings an approval must acknowledge. */
+    readonly warnings?: readonly { code: string; level: string; message: string }[],
   ) {
     super(message);
   }

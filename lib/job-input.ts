@@ -1,5 +1,6 @@
 import type { BlockFields, JobFields, StageFields } from "@/db/jobs";
 import type { JobBlocksInput, UpdateJobInput } from "@/app/(office)/jobs/schema";
+import { standardAtmospherePressurePa } from "@/lib/engineering/atmosphere";
 
 // Parsed form/API input (already SI) -> database columns.
 
@@ -20,6 +21,8 @@ export function jobColumns(input: Partial<ParsedJobFields>): Partial<JobFields> 
     compressorEfficiency: input.compressorEfficiencyPct === undefined ? undefined : input.compressorEfficiencyPct / 100,
     intercoolerEffectiveness: input.intercoolerEffectivenessPct === undefined ? undefined : input.intercoolerEffectivenessPct / 100,
     useAllDrills: input.useAllDrills,
+    cruiseLambda: input.cruiseLambda,
+    drillSystem: input.drillSystem,
     notes: input.notes,
   };
   if (input.fuelKind !== undefined) {
@@ -27,6 +30,14 @@ export function jobColumns(input: Partial<ParsedJobFields>): Partial<JobFields> 
     columns.fuelEthanolPct = input.fuelKind === "blend" ? input.ethanolPct : null;
     columns.fuelDensityKgM3 = input.fuelKind === "custom" ? input.fuelDensityKgM3 : null;
     columns.fuelStoichAfr = input.fuelKind === "custom" ? input.fuelStoichAfr : null;
+  }
+  // The ambient is a barometer reading, or the standard atmosphere at the site's elevation (which is kept).
+  if (input.siteElevation !== undefined) {
+    columns.ambientPressurePa = standardAtmospherePressurePa(input.siteElevation);
+    columns.siteElevationM = input.siteElevation;
+  } else if (input.ambientPressure !== undefined) {
+    columns.ambientPressurePa = input.ambientPressure;
+    columns.siteElevationM = null;
   }
   if ("targetPower" in input && input.targetPower === undefined) columns.targetPowerW = null;
   if ("chargeTemperature" in input && input.chargeTemperature === undefined) columns.chargeTemperatureK = null;
@@ -53,11 +64,14 @@ export function blockColumns(input: JobBlocksInput): (BlockFields & { stages: St
     tubeBendDeg: orNull(block.tubeBendDeg),
     tubeBendRadiusM: orNull(block.tubeBendRadius),
     tubeSwageM: orNull(block.tubeSwage),
+    tubeMaxRearwardM: orNull(block.tubeMaxRearward),
+    tubeMaxDownwardM: orNull(block.tubeMaxDownward),
     stages: block.stages.map((stage) => ({
       valveKind: stage.valveKind,
       vacuumRatingPa: stage.valveKind === "vacuum" ? orNull(stage.vacuumRating) : null,
       setpointPa: stage.valveKind === "boost" ? orNull(stage.setpoint) : null,
       targetKind: stage.targetKind,
+      mode: stage.mode ?? (block.side === "primary" ? "part" : "full"),
       targetFrom: stage.targetKind === "afr" || stage.targetKind === "lambda" ? orNull(stage.targetFrom) : null,
       // AFR and lambda "to", a percent of main-jet area, or an area in m².
       targetTo: (stage.targetKind === "area" ? stage.targetArea : stage.targetTo) ?? 0,

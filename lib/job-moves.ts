@@ -17,8 +17,13 @@ import { ALL_CAUTIONS } from "./safety";
  * Moves a job to another state (the one way pages and the API do it) and sends what the move calls for:
  * a release sends every active machinist the block travelers of the released revision.
  */
-export async function moveJob(actor: Viewer, jobId: string, to: JobState): Promise<{ state: JobState; revision: number }> {
-  const moved = await changeJobState(actor, jobId, to);
+export async function moveJob(
+  actor: Viewer,
+  jobId: string,
+  to: JobState,
+  options: { acknowledgeWarnings?: boolean | undefined } = {},
+): Promise<{ state: JobState; revision: number }> {
+  const moved = await changeJobState(actor, jobId, to, options);
   if (moved.state === "released") await sendReleaseNotice(actor, jobId, moved.revision);
   return moved;
 }

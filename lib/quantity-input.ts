@@ -4,8 +4,8 @@ import { toSI, UNITS_BY_KIND, type QuantityKind, type UnitsByKind } from "@/lib/
 // A form or API field that carries its own unit: { value, unit }, turned into SI on parse. The same schema
 // serves Conform (strings from FormData, coerced) and the JSON API (numbers).
 
-/** Limits in SI: values must be above zero (or at least zero with allowZero) and at most max. */
-type Limits = { max?: number; allowZero?: boolean };
+/** Limits in SI: values must be above zero (or at least zero with allowZero), at least min and at most max. */
+type Limits = { min?: number; max?: number; allowZero?: boolean };
 
 function unitSchema<K extends QuantityKind>(kind: K, label: string, units?: readonly UnitsByKind[K][]) {
   const allowed = (units ?? UNITS_BY_KIND[kind]) as readonly string[];
@@ -29,6 +29,10 @@ export function quantity<K extends QuantityKind>(kind: K, label: string, limits:
       if (tooSmall) {
         const message = kind === "temperature" ? `${label} is below absolute zero.` : `${label} must be ${limits.allowZero ? "0 or more" : "greater than 0"}.`;
         ctx.addIssue({ code: "custom", path: ["value"], message });
+        return z.NEVER;
+      }
+      if (limits.min !== undefined && si < limits.min) {
+        ctx.addIssue({ code: "custom", path: ["value"], message: `${label} is smaller than any carburetor job meets: check the unit.` });
         return z.NEVER;
       }
       if (limits.max !== undefined && si > limits.max) {

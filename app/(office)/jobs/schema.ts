@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { quantity, optionalQuantity } from "@/lib/quantity-input";
 import { JOB_STATES } from "@/lib/job-states";
+import { SITE_ELEVATION_RANGE_M } from "@/lib/engineering/atmosphere";
 
 // Schemas of the job forms, shared by the Conform forms, the server actions and the JSON API. Quantities come
 // as { value, unit } and leave as SI.
@@ -16,6 +17,35 @@ const lambda = (label: string) =>
 
 const percent = (label: string, min = 1, max = 100) =>
   z.coerce.number({ error: `Enter ${label}.` }).min(min, { error: `${label} must be ${min}-${max} %.` }).max(max, { error: `${label} must be ${min}-${max} %.` });
+
+const M_PER_FT = 0.3048; // NIST SP 811: 1 ft = 0.3048 m exactly
+
+/** A site elevation as { value, unit } in m or ft, parsed to metres within the range a shop plans for. */
+const siteElevation = z
+  .object(
+    {
+      value: z.coerce.number({ error: "Enter the site elevation." }).refine(Number.isFinite, { error: "Enter the site elevation as a number." }),
+      unit: z.enum(["m", "ft"], { error: "site elevation: the unit must be one of m, ft." }),
+    },
+    { error: "Enter the site elevation." },
+  )
+  .transform((q, ctx) => {
+    const m = q.unit === "ft" ? q.value * M_PER_FT : q.value;
+    if (m < SITE_ELEVATION_RANGE_M.min || m > SITE_ELEVATION_RANGE_M.max) {
+      ctx.addIssue({ code: "custom", path: ["value"], message: `The site elevation must be between ${SITE_ELEVATION_RANGE_M.min} and ${SITE_ELEVATION_RANGE_M.max} m.` });
+      return z.NEVER;
+    }
+    return m;
+  });
+
+const optionalSiteElevation = z.preprocess((raw) => {
+  if (raw === undefined || raw === null || raw === "") return undefined;
+  if (typeof raw === "object" && raw !== null && "value" in raw) {
+    const value = (raw as { value?: unknown }).value;
+    if (value === undefined || value === null || value === "") return undefined;
+  }
+  return raw;
+}, siteElevation.optional());
 
 const checkbox = z.preprocess((v) => v === true || v === "on" || v === "true", z.boolean());
 
@@ -33,13 +63,29 @@ export const jobFieldsSchema = z.object({
   intercooled: checkbox,
   chargeTemperature: optionalQuantity("temperature", "charge temperature", {}, ["°F", "°C", "K"]),
   ambientTemperature: quantity("temperature", "ambient temperature", {}, ["°F", "°C", "K"]),
+  // Absolute (a barometer's station reading): 50-110 kPa spans every inhabited site and weather.
+  ambientPressure: optionalQuantity("pressure", "ambient pressure", { min: 50_000, max: 110_000 }, ["kPa", "inHg", "psi"]),
+  siteElevation: optionalSiteElevation,
+  cruiseLambda: lambda("cruise lambda").optional(),
+  drillSystem: z.enum(["inch", "metric", "mixed"], { error: "drillSystem must be inch, metric or mixed." }).optional(),
   compressorEfficiencyPct: percent("compressor efficiency", 30, 95),
   intercoolerEffectivenessPct: percent("intercooler effectiveness", 0, 100),
   useAllDrills: checkbox,
   notes: z.string().trim().max(4000).default(""),
 });
 
-function requireFuelDetails(job: { fuelKind: string; ethanolPct?: number; fuelDensityKgM3?: number; fuelStoichAfr?: number }, ctx: z.RefinementCtx) {
+/** The ambient comes from a barometer or from the site's elevation: one of them at most. */
+export function requireOneAmbient(job: { ambientPressure?: number | undefined; siteElevation?: number | undefined }, ctx: z.RefinementCtx) {
+  if (job.ambientPressure !== undefined && job.siteElevation !== undefined) {
+    ctx.addIssue({ code: "custom", path: ["siteElevation"], message: "Give either the ambient pressure or the site elevation, not both." });
+  }
+}
+
+function requireFuelDetails(
+  job: { fuelKind?: string; ethanolPct?: number; fuelDensityKgM3?: number; fuelStoichAfr?: number; ambientPressure?: number; siteElevation?: number },
+  ctx: z.RefinementCtx,
+) {
+  requireOneAmbient(job, ctx);
   if (job.fuelKind === "blend" && job.ethanolPct === undefined) {
     ctx.addIssue({ code: "custom", path: ["ethanolPct"], message: "Enter the ethanol content of the blend (85 for E85)." });
   }
@@ -74,6 +120,7 @@ const stageSchema = z
     vacuumRating: optionalQuantity("pressure", "vacuum rating", { max: 30 * 3386.389 }, ["inHg", "kPa"]),
     setpoint: optionalQuantity("pressure", "opening pressure", { max: 60 * PSI }, ["psi", "kPa", "bar"]),
     targetKind: z.enum(["afr", "lambda", "percentMainJet", "area"], { error: "Choose how the enrichment is given." }),
+    mode: z.enum(["part", "full"], { error: "mode must be part (primary side alone) or full (both sides)." }).optional(),
     targetFrom: z.coerce.number().positive({ error: "Enter the mixture before the stage opens." }).optional(),
     targetTo: z.coerce.number({ error: "Enter the enrichment target." }).positive({ error: "The enrichment target must be greater than 0." }).optional(),
     targetArea: optionalQuantity("area", "target area", { max: 1 * IN * IN }, ["in²", "mm²"]),
@@ -121,6 +168,8 @@ export const blockSchema = z.object({
   tubeBendDeg: z.coerce.number().min(0, { error: "Bend angle must be 0-180°." }).max(180, { error: "Bend angle must be 0-180°." }).optional(),
   tubeBendRadius: length("bend radius"),
   tubeSwage: length("swage engagement"),
+  tubeMaxRearward: length("room rearward for the tube"),
+  tubeMaxDownward: length("room downward for the tube"),
   stages: z.array(stageSchema, { error: "Add at least one enrichment stage." }).min(1, { error: "Add at least one enrichment stage." }).max(6),
 });
 
@@ -131,11 +180,22 @@ export const jobBlocksSchema = z
   .superRefine((value, ctx) => {
     const sides = value.blocks.map((b) => b.side);
     if (new Set(sides).size !== sides.length) ctx.addIssue({ code: "custom", path: ["blocks"], message: "Each side may have only one metering block." });
+    value.blocks.forEach((block, b) =>
+      block.stages.forEach((stage, s) => {
+        if (block.side === "secondary" && stage.mode === "part") {
+          ctx.addIssue({ code: "custom", path: ["blocks", b, "stages", s, "mode"], message: "A secondary stage is read in full throttle: the secondaries are shut at part throttle." });
+        }
+      }),
+    );
   });
 export type JobBlocksInput = z.output<typeof jobBlocksSchema>;
 
 export const jobStateChangeSchema = z.object({
   to: z.enum(JOB_STATES, { error: `to must be one of ${JOB_STATES.join(", ")}` }),
+  /** Approving a plan with danger warnings needs this, and it is recorded with the revision. */
+  acknowledgeWarnings: z
+    .preprocess((v) => (v === "on" || v === "true" ? true : v === "false" ? false : v), z.boolean({ error: "acknowledgeWarnings must be true or false." }))
+    .optional(),
 });
 
 export const stageChoiceSchema = z.object({

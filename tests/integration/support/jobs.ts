@@ -16,7 +16,7 @@ export function jobBody(overrides: Record<string, unknown> = {}) {
     fuelKind: "gasoline",
     peakBoost: { value: 8, unit: "psi" },
     targetLambdaAtmosphere: 0.88,
-    targetLambdaPeak: 0.78,
+    targetLambdaPeak: 0.86,
     intercooled: true,
     ambientTemperature: { value: 77, unit: "°F" },
     compressorEfficiencyPct: 70,
@@ -39,15 +39,18 @@ export function blocksBody() {
         passageWall: { value: 0.2, unit: "in" },
         passageDepth: { value: 0.4, unit: "in" },
         stages: [
-          { valveKind: "vacuum", vacuumRating: { value: 6.5, unit: "inHg" }, targetKind: "percentMainJet", targetTo: 30, maxHoles: 4 },
-          { valveKind: "boost", setpoint: { value: 3, unit: "psi" }, targetKind: "afr", targetFrom: 12.5, targetTo: 11.5, maxHoles: 4 },
+          // A plan that holds together on the whole-engine model: the 3 psi stage is read in full throttle and
+          // sized from the mixture the plan itself predicts there; the only lean zone left is the caution
+          // below 3 psi, before any boost valve opens.
+          { valveKind: "vacuum", vacuumRating: { value: 6.5, unit: "inHg" }, targetKind: "percentMainJet", targetTo: 12, maxHoles: 4 },
+          { valveKind: "boost", setpoint: { value: 3, unit: "psi" }, targetKind: "afr", mode: "full", targetFrom: 14.0, targetTo: 12.2, maxHoles: 4 },
         ],
       },
       {
         side: "secondary",
         mainJetDiameter: { value: 0.086, unit: "in" },
         mainJetCount: 2,
-        stages: [{ valveKind: "boost", setpoint: { value: 7, unit: "psi" }, targetKind: "lambda", targetFrom: 0.85, targetTo: 0.78, maxHoles: 4 }],
+        stages: [{ valveKind: "boost", setpoint: { value: 7, unit: "psi" }, targetKind: "lambda", targetFrom: 0.95, targetTo: 0.82, maxHoles: 4 }],
       },
     ],
   };

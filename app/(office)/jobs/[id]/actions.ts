@@ -33,7 +33,7 @@ export async function changeStateAction(jobId: string, _previous: FormResult | u
     resetForm: false,
     async work(value, user) {
       const id = await requireVisibleJob(user, jobId);
-      const moved = await moveJob(user, id, value.to);
+      const moved = await moveJob(user, id, value.to, { acknowledgeWarnings: value.acknowledgeWarnings });
       revalidatePath(`/jobs/${id}`);
       revalidatePath("/jobs");
       return value.to === "planned"

@@ -1,14 +1,11 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { getJob } from "@/db/jobs";
-import { getRevisionSnapshot, solveJob } from "@/db/revisions";
 import { ALL_ROLES, OFFICE_ROLES, requireRole } from "@/lib/auth/session";
 import { RequestRefusal } from "@/lib/errors";
 import { JOB_STATE_LABELS } from "@/lib/job-states";
 import { parseIdParam } from "@/lib/route-params";
-import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
-import type { BlockRow } from "@/db/jobs";
-import type { Job } from "@/db/schema";
+import { shownPlanOf, type ShownPlan } from "@/lib/job-plan-shown";
 import { ButtonLink } from "@/components/ui/button";
 import { PageHeader, Sheet, Tag } from "@/components/ui/sheet";
 import { BlockList } from "./_plan/block-list";
@@ -24,13 +21,6 @@ export const metadata: Metadata = { title: "Job" };
 
 type Params = { params: Promise<{ id: string }> };
 
-interface PlanToShow {
-  job: Job;
-  plan: ConversionPlan;
-  blocks: BlockRow[];
-  source: string;
-}
-
 export default async function JobPage({ params }: Params) {
   const { id } = await params;
   const user = await requireRole(ALL_ROLES, `/jobs/${id}`);
@@ -43,14 +33,11 @@ export default async function JobPage({ params }: Params) {
   const office = OFFICE_ROLES.includes(user.role);
 
   // A draft is solved now, with the shop's rack; past draft the bench works from the approved revision.
-  let shown: PlanToShow | undefined;
+  let shown: ShownPlan | undefined;
   let refusal: string | undefined;
-  if (job.state !== "draft" && job.currentRevision > 0) {
-    const revision = await getRevisionSnapshot(job.id, job.currentRevision);
-    if (revision) shown = { job: revision.snapshot.job as unknown as Job, plan: revision.snapshot.plan, blocks: revision.snapshot.blocks, source: `As approved in revision ${job.currentRevision}.` };
-  } else if (record.blocks.length) {
+  if (job.state !== "draft" || record.blocks.length) {
     try {
-      shown = { job, plan: await solveJob(job.id), blocks: record.blocks, source: "Working plan, solved now from the inputs and the drills available." };
+      shown = await shownPlanOf(record);
     } catch (error) {
       if (!(error instanceof RequestRefusal)) throw error;
       refusal = error.message;
@@ -95,7 +82,12 @@ export default async function JobPage({ params }: Params) {
           <dt className="text-graphite">State</dt>
           <dd>{JOB_STATE_LABELS[job.state].meaning}</dd>
         </dl>
-        {office ? <StateControls action={changeStateAction.bind(null, job.id)} moves={moves} idle={officeIdleNote(job.state)} /> : null}
+        {office ? <StateControls
+            action={changeStateAction.bind(null, job.id)}
+            moves={moves}
+            idle={officeIdleNote(job.state)}
+            dangers={job.state === "draft" && shown ? shown.plan.warnings.filter((w) => w.level === "danger").length : 0}
+          /> : null}
       </div>
       <div className="mb-8 grid gap-6 lg:grid-cols-[minmax(0,1fr)_32rem]">
         <Sheet title="Engine and fuel">

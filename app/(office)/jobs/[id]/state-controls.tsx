@@ -18,14 +18,19 @@ export function StateControls({
   action,
   moves,
   idle,
+  dangers = 0,
 }: {
   action: (previous: FormResult | undefined, formData: FormData) => Promise<FormResult>;
   moves: StateMove[];
   /** Said instead of buttons when the office has no move to make from here. */
   idle: string;
+  /** Danger warnings in the plan an approval would keep: approving needs an explicit acknowledgement. */
+  dangers?: number;
 }) {
   const [result, formAction, pending] = useActionState(action, undefined);
-  const refused = result && result.httpStatus !== 200 ? (result.error?.[""] ?? result.error?.to ?? ["Not done."]) : undefined;
+  const refused =
+    result && result.httpStatus !== 200 ? (result.error?.[""] ?? result.error?.to ?? result.error?.acknowledgeWarnings ?? ["Not done."]) : undefined;
+  const approving = moves.some((m) => m.to === "planned");
   return (
     <form action={formAction} aria-label="Job state" className="flex flex-col items-end gap-2">
       <div className="flex flex-wrap justify-end gap-2">
@@ -36,6 +41,15 @@ export function StateControls({
           </Button>
         ))}
       </div>
+      {approving && dangers > 0 ? (
+        <label className="flex max-w-sm items-start gap-2 text-sm text-fault">
+          <input type="checkbox" name="acknowledgeWarnings" className="mt-1 h-5 w-5" />
+          <span>
+            I have read the {dangers} danger warning{dangers > 1 ? "s" : ""} of this plan and approve it anyway; the acknowledgement is kept with the
+            revision.
+          </span>
+        </label>
+      ) : null}
       <FormMessage errors={refused} success={result?.httpStatus === 200 ? result.message : undefined} />
     </form>
   );

@@ -5,7 +5,7 @@ import { authorize } from "@/lib/auth/api-access";
 import { ALL_ROLES, OFFICE_ROLES } from "@/lib/auth/session";
 import { blockColumns, jobColumns } from "@/lib/job-input";
 import { parseIdParam } from "@/lib/route-params";
-import { jobBlocksSchema, jobFieldsSchema } from "@/app/(office)/jobs/schema";
+import { jobBlocksSchema, jobFieldsSchema, requireOneAmbient } from "@/app/(office)/jobs/schema";
 import { jobDto } from "./job-dto";
 
 type Params = { params: Promise<{ id: string }> };
@@ -27,7 +27,8 @@ const patchSchema = jobFieldsSchema
     customerId: z.uuid({ error: "customerId must be a customer's id" }).optional(),
     blocks: z.unknown().optional(),
   })
-  .strict();
+  .strict()
+  .superRefine(requireOneAmbient);
 
 /** Changes the job's inputs (and, with `blocks`, replaces its blocks and stages). Sends an approved job back to draft. */
 export async function PATCH(request: Request, { params }: Params) {

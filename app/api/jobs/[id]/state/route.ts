@@ -18,7 +18,7 @@ export async function POST(request: Request, { params }: { params: Promise<{ id:
   if (!access.ok) return access.response;
   if (!(await getJob(access.user, id.id))) return apiError(404, "not_found", "No such job.");
   try {
-    return Response.json(await moveJob(access.user, id.id, parsed.data.to));
+    return Response.json(await moveJob(access.user, id.id, parsed.data.to, { acknowledgeWarnings: parsed.data.acknowledgeWarnings }));
   } catch (error) {
     return refusalResponse(error);
   }
