@@ -163,7 +163,7 @@ function planStage(stage: StageInput, block: BlockInput, mainJetAreaM2: number, 
     valveWindowAreaM2: stage.valveWindowAreaM2,
     channelLengthM: block.channelLengthM,
     minWebM: block.minWebM,
-  });
+  }).candidates;
   const best = ranked[0];
   if (!best) throw new RangeError("drills: no drill to choose from");
   const picked = stage.chosen
