@@ -22,8 +22,9 @@
 // it is out of reach. A target just beyond the drills' reach is still met by the layout at the limit when
 // that layout misses by no more than REACH_TOLERANCE_FRACTION; beyond that it is out of reach.
 //
-// The search runs on every keystroke of the planner, over the whole drill series (several hundred drills x
-// 4 counts): the loop writes into reused typed arrays and one radix sort orders them, with no comparator.
+// The search runs on every keystroke of the planner, over up to the whole drill series (several hundred drills
+// x 4 counts): one pass picks the allowed drills, the loop writes into reused typed arrays and one radix sort
+// orders them, with no comparator.
 
 import { requireInteger, requireNonNegative, requirePositive } from "./checks";
 import {
@@ -140,37 +141,45 @@ function ensureCapacity(candidates: number, drillCount: number): void {
 
 /**
  * Fills drillRank[0..m) with the indices of the allowed drills in tie-break order: larger diameter first, then
- * label, then list position, and returns m. A list sorted by ascending diameter without repeats (the usual
- * drill table) is just read backwards; anything else is sorted once here, outside the candidate loop.
+ * label, then list position, and returns m. A list in ascending diameter (the usual drill table, where only a
+ * few sizes repeat, such as letter E and 1/4 in) is read backwards, each run of one diameter put in label
+ * order; anything else is sorted once here, outside the candidate loop.
  */
 function rankDrills(drills: readonly Drill[], limits: RestrictionDrillLimits): number {
   const n = drills.length;
-  let strictlyAscending = true;
+  let ascending = true;
   for (let i = 0; i < n; i++) {
     const d = (drills[i] as Drill).diameterM;
     if (!(Number.isFinite(d) && d > 0)) {
       throw new RangeError(`drills[${i}].diameterM must be a positive number, got ${d}`);
     }
-    if (i > 0 && !(d > (drills[i - 1] as Drill).diameterM)) strictlyAscending = false;
+    if (i > 0 && d < (drills[i - 1] as Drill).diameterM) ascending = false;
+  }
+  if (!ascending) {
+    const indices: number[] = [];
+    for (let i = 0; i < n; i++) if (isRestrictionDrill(drills[i] as Drill, limits)) indices.push(i);
+    indices.sort((a, b) => (drills[b] as Drill).diameterM - (drills[a] as Drill).diameterM || byLabel(drills, a, b));
+    for (let i = 0; i < indices.length; i++) drillRank[i] = indices[i] as number;
+    return indices.length;
   }
   let m = 0;
-  if (strictlyAscending) {
-    for (let i = n - 1; i >= 0; i--) if (isRestrictionDrill(drills[i] as Drill, limits)) drillRank[m++] = i;
-    return m;
+  for (let last = n - 1; last >= 0; ) {
+    const d = (drills[last] as Drill).diameterM;
+    let first = last;
+    while (first > 0 && (drills[first - 1] as Drill).diameterM === d) first--;
+    const start = m;
+    for (let i = first; i <= last; i++) if (isRestrictionDrill(drills[i] as Drill, limits)) drillRank[m++] = i;
+    if (m - start > 1) drillRank.subarray(start, m).sort((a, b) => byLabel(drills, a, b));
+    last = first - 1;
   }
-  const indices: number[] = [];
-  for (let i = 0; i < n; i++) if (isRestrictionDrill(drills[i] as Drill, limits)) indices.push(i);
-  indices.sort((a, b) => {
-    const da = (drills[a] as Drill).diameterM;
-    const db = (drills[b] as Drill).diameterM;
-    if (da !== db) return db - da;
-    const la = (drills[a] as Drill).label;
-    const lb = (drills[b] as Drill).label;
-    if (la !== lb) return la < lb ? -1 : 1;
-    return a - b;
-  });
-  for (let i = 0; i < indices.length; i++) drillRank[i] = indices[i] as number;
-  return indices.length;
+  return m;
+}
+
+function byLabel(drills: readonly Drill[], a: number, b: number): number {
+  const la = (drills[a] as Drill).label;
+  const lb = (drills[b] as Drill).label;
+  if (la !== lb) return la < lb ? -1 : 1;
+  return a - b;
 }
 
 /**
