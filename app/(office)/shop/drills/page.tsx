@@ -49,7 +49,8 @@ export default async function DrillRackPage() {
     minWeb: {
       shown: size(settings.minWebM),
       isDefault: settings.isDefault.minWebM,
-      stored: settings.isDefault.minWebM ? "" : number(settings.minWebM),
+      // Six significant figures, so saving the form again does not round a web typed in the other unit.
+      stored: settings.isDefault.minWebM ? "" : String(Number((settings.minWebM / (user.lengthUnit === "mm" ? 0.001 : M_PER_IN)).toPrecision(6))),
     },
     defaults: {
       smallestRestrictionDrill: drillShown(DEFAULT_SMALLEST_RESTRICTION_DRILL_LABEL),
