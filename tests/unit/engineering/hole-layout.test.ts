@@ -103,6 +103,9 @@ describe("solveHoleLayout", () => {
     expect(() => solveHoleLayout({ targetEffectiveAreaM2: 1e-6, drills: [D52], maxHoles: 0 })).toThrow(RangeError);
     expect(() => solveHoleLayout({ targetEffectiveAreaM2: 0, drills: [D52], maxHoles: 1 })).toThrow(RangeError);
     expect(solveHoleLayout({ targetEffectiveAreaM2: 1e-6, drills: [], maxHoles: 2 }).candidates).toEqual([]);
+    const crossed = { system: "inch", smallestDrillM: 0.125 * M_PER_IN, largestDrillM: 0.028 * M_PER_IN } as const;
+    expect(() => solveHoleLayout({ targetEffectiveAreaM2: 1e-6, drills: [D52], maxHoles: 1, limits: crossed })).toThrow(/smallestDrillM/);
+    expect(() => solveHoleLayout({ targetEffectiveAreaM2: 1e-6, drills: [D52], maxHoles: 1, minWebM: -0.001 })).toThrow(/minWebM/);
   });
 });
 
