@@ -8,6 +8,7 @@ import { dangerWarnings } from "@/lib/engineering/plan-warnings";
 import { recordAudit } from "./audit";
 import { getDb, type Executor } from "./client";
 import { listStockedDrills } from "./drill-stock";
+import { getShopSettings } from "./shop-settings";
 import { lockJob, type BlockRow, type Viewer } from "./jobs";
 import { enrichmentStages, jobs, measurements, meteringBlocks, operations, planRevisions, signOffs } from "./schema";
 
@@ -34,7 +35,7 @@ export async function solveJob(jobId: string): Promise<ConversionPlan> {
   const db = getDb();
   const [job] = await db.select().from(jobs).where(eq(jobs.id, jobId));
   if (!job) throw new RequestRefusal(404, "No such job.");
-  return planJob(job, await loadBlocks(db, jobId), await listStockedDrills());
+  return planJob(job, await loadBlocks(db, jobId), await listStockedDrills(), await getShopSettings());
 }
 
 /**
@@ -43,11 +44,12 @@ export async function solveJob(jobId: string): Promise<ConversionPlan> {
  */
 export async function approveRevision(actor: Viewer, jobId: string, options: { acknowledgeWarnings?: boolean | undefined } = {}): Promise<{ revision: number }> {
   const stocked = await listStockedDrills();
+  const shop = await getShopSettings();
   return getDb().transaction(async (tx) => {
     const job = await lockJob(tx, jobId);
     if (!canMove(job.state, "planned")) throw new RequestRefusal(409, `A ${job.state} job cannot be approved: edit it first.`, "to");
     const blocks = await loadBlocks(tx, jobId);
-    const plan = planJob(job, blocks, stocked);
+    const plan = planJob(job, blocks, stocked, shop);
     // A plan that may damage the engine is approved only with an explicit acknowledgement, kept with it.
     const dangers = dangerWarnings(plan.warnings).map(({ code, level, message }) => ({ code, level, message }));
     if (dangers.length && !options.acknowledgeWarnings) {

@@ -16,8 +16,8 @@ export type FormResult<Data = never> = SubmissionResult<string[]> & { httpStatus
 export type WorkOutcome<Data> = string | void | { message?: string; data?: Data };
 
 /**
- * The one wrapper for server actions: parse the form with its zod schema (400 with field errors),
- * load the session (401), check the role (403), then do the work. The work runs its writes in one
+ * The one wrapper for server actions: load the session (401), check the role (403), then check the form
+ * with its zod schema (400 with field errors), then do the work. The work runs its writes in one
  * transaction inside the data layer.
  *
  * resetForm (default true) clears the form after success, right for forms that create something;
@@ -34,9 +34,13 @@ export async function runFormAction<Schema extends z.ZodType, Data = never>(
   },
 ): Promise<FormResult<Data>> {
   const submission = parseWithZod(formData, { schema: options.schema });
-  if (submission.status === "error") return { ...submission.reply(), httpStatus: 400 };
+  // Who may comes before what was sent (401/403 before 400).
   const access = await checkRole(options.roles);
-  if (!access.ok) return { ...submission.reply({ formErrors: [access.message] }), httpStatus: access.status };
+  if (!access.ok) {
+    // Only the refusal: the form's own field errors are not the stranger's business.
+    return { ...submission.reply({ formErrors: [access.message] }), error: { "": [access.message] }, httpStatus: access.status };
+  }
+  if (submission.status === "error") return { ...submission.reply(), httpStatus: 400 };
   if (submission.status !== "success") return { ...submission.reply(), httpStatus: 200 };
   try {
     const outcome = await options.work(submission.value, access.user);

@@ -2,6 +2,7 @@ import { ALL_DRILLS } from "@/lib/engineering/drills";
 import { planConversion, type BlockInput, type ConversionPlan, type EngineInput, type EnrichmentTarget } from "@/lib/engineering/conversion-plan";
 import { fuelProperties, type FuelSpec } from "@/lib/engineering/fuels";
 import type { Drill } from "@/lib/engineering/types";
+import { restrictionDrillLimits } from "@/lib/engineering/restriction-limits";
 import type { Job } from "@/db/schema";
 import type { BlockRow, StageRow } from "@/db/jobs";
 import { RequestRefusal } from "@/lib/errors";
@@ -94,12 +95,22 @@ export function blockInputOf(block: BlockRow): BlockInput {
 }
 
 /** Plans the job from its stored inputs. `stocked` is the rack; the job may ask for every standard drill. */
-export function planJob(job: Job, blocks: BlockRow[], stocked: readonly Drill[]): ConversionPlan {
+export function planJob(
+  job: Job,
+  blocks: BlockRow[],
+  stocked: readonly Drill[],
+  shop: { smallestRestrictionDrill: string; largestRestrictionDrill: string; minWebM: number },
+): ConversionPlan {
   if (blocks.length === 0) throw new RequestRefusal(409, "Add the metering blocks and their stages before solving.", "blocks");
   const drills = job.useAllDrills ? ALL_DRILLS : stocked;
   if (drills.length === 0) throw new RequestRefusal(409, "The drill rack is empty: stock drills, or let this job use every standard drill.", "useAllDrills");
   try {
-    return planConversion({ engine: engineInputOf(job), blocks: blocks.map(blockInputOf), drills });
+    const limits = restrictionDrillLimits({
+      system: job.drillSystem,
+      smallestDrillLabel: shop.smallestRestrictionDrill,
+      largestDrillLabel: shop.largestRestrictionDrill,
+    });
+    return planConversion({ engine: engineInputOf(job), blocks: blocks.map(blockInputOf), drills, limits, minWebM: shop.minWebM });
   } catch (error) {
     if (error instanceof RangeError) throw new RequestRefusal(409, `The plan cannot be solved: ${error.message}`);
     throw error;

@@ -11,6 +11,7 @@
 
 import { ALL_DRILLS } from "../lib/engineering/drills";
 import { solveHoleLayout } from "../lib/engineering/hole-layout";
+import { DEFAULT_RESTRICTION_DRILL_LIMITS, type RestrictionDrillLimits } from "../lib/engineering/restriction-limits";
 import { proposeStaging, type StagingModel } from "../lib/engineering/staging";
 import { planConversion } from "../lib/engineering/conversion-plan";
 import { GASOLINE } from "../lib/engineering/fuels";
@@ -92,22 +93,32 @@ const TRAVELER: TravelerData = {
 
 let holeTargetStep = 0;
 
+function holeLayout(limits: RestrictionDrillLimits) {
+  // Vary the target so no call can reuse the previous one's work.
+  holeTargetStep = (holeTargetStep + 1) % 97;
+  return solveHoleLayout({
+    targetEffectiveAreaM2: (1 + holeTargetStep / 40) * 1e-6,
+    drills: ALL_DRILLS,
+    limits,
+    maxHoles: 4,
+    valveWindowAreaM2: jetArea(0.2),
+    channelLengthM: 0.5 * M_PER_IN,
+    minWebM: 0.03 * M_PER_IN,
+  });
+}
+
 const CASES: BenchCase[] = [
   {
-    name: `hole layout: ${ALL_DRILLS.length} drills x 1-4 holes, full ranking`,
+    // The worst case: every drill of every series allowed.
+    name: `hole layout: all ${ALL_DRILLS.length} drills allowed x 1-4 holes, full ranking`,
     budgetMs: 0.2,
-    run: () => {
-      // Vary the target so no call can reuse the previous one's work.
-      holeTargetStep = (holeTargetStep + 1) % 97;
-      return solveHoleLayout({
-        targetEffectiveAreaM2: (1 + holeTargetStep / 40) * 1e-6,
-        drills: ALL_DRILLS,
-        maxHoles: 4,
-        valveWindowAreaM2: jetArea(0.2),
-        channelLengthM: 0.5 * M_PER_IN,
-        minWebM: 0.03 * M_PER_IN,
-      });
-    },
+    run: () => holeLayout({ system: "mixed", smallestDrillM: 1e-5, largestDrillM: 0.1 }),
+  },
+  {
+    // What a plan does with the shop's defaults: the whole series is read, the inch drills #70 to 1/8 ranked.
+    name: `hole layout: ${ALL_DRILLS.length} drills, inch #70 to 1/8 allowed x 1-4 holes, full ranking`,
+    budgetMs: 0.1,
+    run: () => holeLayout(DEFAULT_RESTRICTION_DRILL_LIMITS),
   },
   {
     name: "staging proposal: 3 boost valves, part + full throttle, drilled",

@@ -17,6 +17,7 @@ import {
   type StageOutcome,
 } from "./plan-check";
 import { byGravity, type PlanWarning } from "./plan-warnings";
+import type { RestrictionDrillLimits } from "./restriction-limits";
 import { planPickupTube, COMMON_PICKUP_TUBE_OD_M, type PickupTubePlan } from "./pickup-tube";
 import { jetAreaOf, mainJetsBySide, sizeStages, stageMode, type StageInput, type StagePlan } from "./stage-sizing";
 import { stagingBalance, type CarburetorSide, type StagingBalance, type StagingModel, type StagingSweep } from "./staging";
@@ -182,12 +183,18 @@ function blockWarnings(block: BlockInput, stages: readonly StagePlan[], plug: Pa
 }
 
 /**
- * Plans every block. `drills` is what the solver may choose from (the shop's rack, or the whole series, already
- * limited to the plan's drill system and the shop's smallest and largest restriction drill); inch drills among
- * them are used for the vacuum-passage plug, which takes a Unified thread. `minWebM` is the shop's least web,
- * used where a block gives none.
+ * Plans every block. `drills` is what the shop has (the rack, or the whole series); the restriction holes come
+ * from those within `limits` (the plan's drill system and the shop's smallest and largest restriction drill,
+ * defaults when absent), and inch drills among them serve the vacuum-passage plug, which takes a Unified
+ * thread. `minWebM` is the shop's least web, used where a block gives none.
  */
-export function planConversion(input: { engine: EngineInput; blocks: readonly BlockInput[]; drills: readonly Drill[]; minWebM?: number | undefined }): ConversionPlan {
+export function planConversion(input: {
+  engine: EngineInput;
+  blocks: readonly BlockInput[];
+  drills: readonly Drill[];
+  limits?: RestrictionDrillLimits | undefined;
+  minWebM?: number | undefined;
+}): ConversionPlan {
   const { engine } = input;
   const inchDrills = input.drills.filter((d) => d.system !== "metric");
   for (const block of input.blocks) for (const stage of block.stages) stageMode(stage, block.side);
@@ -195,6 +202,7 @@ export function planConversion(input: { engine: EngineInput; blocks: readonly Bl
   const sized = sizeStages({
     blocks: input.blocks.map((b) => ({ ...b, mainJetAreaM2: jetAreaOf(b.mainJetDiameterM, b.mainJetCount) })),
     drills: input.drills,
+    limits: input.limits,
     minWebM: input.minWebM,
   });
   const mainJets = mainJetsBySide(input.blocks.map((b) => ({ side: b.side, mainJetAreaM2: jetAreaOf(b.mainJetDiameterM, b.mainJetCount) })));

@@ -1,6 +1,10 @@
 // Which holes to drill in a power-valve channel: 1 to 4 holes of one drill from the shop's set, ranked by
 // how close their effective area (holes in series with the valve's flow window) comes to the target.
 //
+// Only drills the shop will use are candidates: of the plan's drill system and between its smallest and
+// largest restriction drill (restriction-limits.ts). When the target lies outside what those drills can give,
+// the result says which limit stops it, and whether it is out of reach altogether.
+//
 // Ranking, a total order:
 //   1. layouts that fit the channel before layouts that don't;
 //   2. smaller absolute area error (effective area vs target);
@@ -13,26 +17,56 @@
 //   count * d + (count - 1) * minWebM <= channelLengthM
 // channelLengthM is the usable length, already less whatever the shop keeps clear at the ends.
 //
-// The search runs on every keystroke of the planner, over the whole drill series (several hundred drills x
-// 4 counts): the loop writes into reused typed arrays and one radix sort orders them, with no comparator.
+// Reach: one hole of the smallest allowed drill to maxHoles of the largest, each in series with the window
+// (1/A_eq² = 1/A_holes² + 1/A_window²). Even endless holes give only the window's area, so a target at or above
+// it is out of reach. A target just beyond the drills' reach is still met by the layout at the limit when
+// that layout misses by no more than REACH_TOLERANCE_FRACTION; beyond that it is out of reach.
+//
+// The search runs on every keystroke of the planner, over up to the whole drill series (several hundred drills
+// x 4 counts): one pass picks the allowed drills, the loop writes into reused typed arrays and one radix sort
+// orders them, with no comparator.
 
 import { requireInteger, requireNonNegative, requirePositive } from "./checks";
+import {
+  checkRestrictionDrillLimits,
+  DEFAULT_MIN_WEB_M,
+  DEFAULT_RESTRICTION_DRILL_LIMITS,
+  isRestrictionDrill,
+  type RestrictionDrillLimits,
+} from "./restriction-limits";
 import type { Drill } from "./types";
 
 export const MAX_HOLES_PER_CHANNEL = 4;
 
+/**
+ * How far the layout at a limit may miss a target beyond the drills' reach and still count as meeting it:
+ * 10 % of the target (common practice, no published source).
+ */
+export const REACH_TOLERANCE_FRACTION = 0.1;
+
+/**
+ * What keeps the target from being met within the limits:
+ * - "smallest-drill": below one hole of the smallest drill the shop allows;
+ * - "largest-layout": above what maxHoles of the largest drill the shop allows give;
+ * - "valve-window": at or above the valve's own flow window, which no number of holes passes;
+ * - "no-drill": no drill in the list is of the plan's system and within the shop's limits.
+ */
+export type HoleLayoutLimit = "smallest-drill" | "largest-layout" | "valve-window" | "no-drill";
+
 export interface HoleLayoutInput {
   /** Effective area the channel should pass, m². */
   targetEffectiveAreaM2: number;
-  /** Drills to choose from (any order). */
+  /** Drills to choose from (any order); only those within `limits` are candidates. */
   drills: readonly Drill[];
+  /** The plan's drill system and the shop's smallest and largest restriction drill. Default: inch, #70 to 1/8. */
+  limits?: RestrictionDrillLimits | undefined;
   /** Largest hole count to consider, 1 to 4. */
   maxHoles: number;
   /** The power valve's own flow window, in series with the holes, m². Omit if not known. */
   valveWindowAreaM2?: number | undefined;
   /** Usable channel length for the row of holes, m. Omit to skip the fit check. */
   channelLengthM?: number | undefined;
-  /** Least metal between neighbouring holes, m. Default 0 (holes may touch); set the shop's rule. */
+  /** Least metal between neighbouring holes, m. Default DEFAULT_MIN_WEB_M (0.020 in); set the shop's rule. */
   minWebM?: number | undefined;
   /** Return only the first N candidates of the ranking. Default: all. */
   limit?: number | undefined;
@@ -53,6 +87,26 @@ export interface HoleLayoutCandidate {
   fits: boolean;
   /** Whether the valve window, not the holes, sets the flow (holes' area >= window area). */
   valveLimited: boolean;
+}
+
+/** The ranking and what it can and cannot reach. */
+export interface HoleLayoutResult {
+  /** Layouts from allowed drills, best first (the first `limit` of them). */
+  candidates: HoleLayoutCandidate[];
+  /**
+   * Effective areas the allowed drills span, m²: one hole of the smallest to maxHoles of the largest (in series
+   * with the window). Null when no drill is allowed.
+   */
+  reach: { smallestM2: number; largestM2: number; smallestDrill: Drill; largestDrill: Drill } | null;
+  /** The limit the target lies beyond, or null when it lies within reach. */
+  limitedBy: HoleLayoutLimit | null;
+  /**
+   * True when no allowed layout can meet the target: no drill, a target at or above the valve window, or one
+   * beyond the drills' reach by more than REACH_TOLERANCE_FRACTION.
+   */
+  unattainable: boolean;
+  /** One sentence saying which limit stops the target; null when limitedBy is null. */
+  message: string | null;
 }
 
 const QUARTER_PI = Math.PI / 4;
@@ -86,35 +140,46 @@ function ensureCapacity(candidates: number, drillCount: number): void {
 }
 
 /**
- * Fills drillRank[0..n) with the drill indices in tie-break order: larger diameter first, then label, then
- * list position. A list sorted by ascending diameter without repeats (the usual drill table) is just read
- * backwards; anything else is sorted once here, outside the candidate loop.
+ * Fills drillRank[0..m) with the indices of the allowed drills in tie-break order: larger diameter first, then
+ * label, then list position, and returns m. A list in ascending diameter (the usual drill table, where only a
+ * few sizes repeat, such as letter E and 1/4 in) is read backwards, each run of one diameter put in label
+ * order; anything else is sorted once here, outside the candidate loop.
  */
-function rankDrills(drills: readonly Drill[]): void {
+function rankDrills(drills: readonly Drill[], limits: RestrictionDrillLimits): number {
   const n = drills.length;
-  let strictlyAscending = true;
+  let ascending = true;
   for (let i = 0; i < n; i++) {
     const d = (drills[i] as Drill).diameterM;
     if (!(Number.isFinite(d) && d > 0)) {
       throw new RangeError(`drills[${i}].diameterM must be a positive number, got ${d}`);
     }
-    if (i > 0 && !(d > (drills[i - 1] as Drill).diameterM)) strictlyAscending = false;
+    if (i > 0 && d < (drills[i - 1] as Drill).diameterM) ascending = false;
   }
-  if (strictlyAscending) {
-    for (let i = 0; i < n; i++) drillRank[i] = n - 1 - i;
-    return;
+  if (!ascending) {
+    const indices: number[] = [];
+    for (let i = 0; i < n; i++) if (isRestrictionDrill(drills[i] as Drill, limits)) indices.push(i);
+    indices.sort((a, b) => (drills[b] as Drill).diameterM - (drills[a] as Drill).diameterM || byLabel(drills, a, b));
+    for (let i = 0; i < indices.length; i++) drillRank[i] = indices[i] as number;
+    return indices.length;
   }
-  const indices = Array.from({ length: n }, (_, i) => i);
-  indices.sort((a, b) => {
-    const da = (drills[a] as Drill).diameterM;
-    const db = (drills[b] as Drill).diameterM;
-    if (da !== db) return db - da;
-    const la = (drills[a] as Drill).label;
-    const lb = (drills[b] as Drill).label;
-    if (la !== lb) return la < lb ? -1 : 1;
-    return a - b;
-  });
-  for (let i = 0; i < n; i++) drillRank[i] = indices[i] as number;
+  let m = 0;
+  for (let last = n - 1; last >= 0; ) {
+    const d = (drills[last] as Drill).diameterM;
+    let first = last;
+    while (first > 0 && (drills[first - 1] as Drill).diameterM === d) first--;
+    const start = m;
+    for (let i = first; i <= last; i++) if (isRestrictionDrill(drills[i] as Drill, limits)) drillRank[m++] = i;
+    if (m - start > 1) drillRank.subarray(start, m).sort((a, b) => byLabel(drills, a, b));
+    last = first - 1;
+  }
+  return m;
+}
+
+function byLabel(drills: readonly Drill[], a: number, b: number): number {
+  const la = (drills[a] as Drill).label;
+  const lb = (drills[b] as Drill).label;
+  if (la !== lb) return la < lb ? -1 : 1;
+  return a - b;
 }
 
 /**
@@ -157,25 +222,37 @@ function sortByError(n: number): Int32Array {
   return src;
 }
 
-export function solveHoleLayout(input: HoleLayoutInput): HoleLayoutCandidate[] {
+export function solveHoleLayout(input: HoleLayoutInput): HoleLayoutResult {
   const target = requirePositive("targetEffectiveAreaM2", input.targetEffectiveAreaM2);
   const maxHoles = requireInteger("maxHoles", input.maxHoles, 1, MAX_HOLES_PER_CHANNEL);
   const window =
     input.valveWindowAreaM2 === undefined ? 0 : requirePositive("valveWindowAreaM2", input.valveWindowAreaM2);
   const channel = input.channelLengthM === undefined ? -1 : requirePositive("channelLengthM", input.channelLengthM);
-  const web = input.minWebM === undefined ? 0 : requireNonNegative("minWebM", input.minWebM);
+  const web = input.minWebM === undefined ? DEFAULT_MIN_WEB_M : requireNonNegative("minWebM", input.minWebM);
+  const limits = input.limits === undefined ? DEFAULT_RESTRICTION_DRILL_LIMITS : checkRestrictionDrillLimits(input.limits);
   const drills = input.drills;
-  const drillCount = drills.length;
+  ensureCapacity(0, drills.length);
+  const drillCount = rankDrills(drills, limits);
   const total = drillCount * maxHoles;
   const limit =
     input.limit === undefined
       ? total
       : Math.min(total, requireInteger("limit", input.limit, 0, Number.MAX_SAFE_INTEGER));
-  if (total === 0) return [];
-
-  ensureCapacity(total, drillCount);
-  rankDrills(drills);
   const windowSquared = window * window;
+  const effectiveOf = (holes: number) =>
+    window === 0 ? holes : (holes * window) / Math.sqrt(holes * holes + windowSquared);
+
+  if (total === 0) {
+    return {
+      candidates: [],
+      reach: null,
+      limitedBy: "no-drill",
+      unattainable: true,
+      message: `No drill in the list is of the plan's system (${limits.system}) and within the shop's smallest and largest restriction drill.`,
+    };
+  }
+
+  ensureCapacity(total, drills.length);
 
   // Candidates are written in tie-break order (fewer holes, then larger drill, then label), so the stable
   // sort by error leaves exact ties in that order.
@@ -207,12 +284,47 @@ export function solveHoleLayout(input: HoleLayoutInput): HoleLayoutCandidate[] {
       out[written++] = candidate(drills[drillOf[c] as number] as Drill, countOf[c] as number, pass === 0);
     }
   }
-  return out;
+
+  // drillRank runs from the largest allowed drill to the smallest.
+  const largestDrill = drills[drillRank[0] as number] as Drill;
+  const smallestDrill = drills[drillRank[drillCount - 1] as number] as Drill;
+  const smallestM2 = effectiveOf(QUARTER_PI * smallestDrill.diameterM ** 2);
+  const largestM2 = effectiveOf(maxHoles * QUARTER_PI * largestDrill.diameterM ** 2);
+  const reach = { smallestM2, largestM2, smallestDrill, largestDrill };
+  const tolerance = REACH_TOLERANCE_FRACTION * target;
+  const holesWord = maxHoles === 1 ? "one hole" : `${maxHoles} holes`;
+  if (window !== 0 && target >= window) {
+    return {
+      candidates: out,
+      reach,
+      limitedBy: "valve-window",
+      unattainable: true,
+      message: "The target is at or above what the valve's own flow window passes: no number of holes reaches it.",
+    };
+  }
+  if (target > largestM2) {
+    return {
+      candidates: out,
+      reach,
+      limitedBy: "largest-layout",
+      unattainable: target - largestM2 > tolerance,
+      message: `The target is above what ${holesWord} of ${largestDrill.label} give, the largest drill the shop allows.`,
+    };
+  }
+  if (target < smallestM2) {
+    return {
+      candidates: out,
+      reach,
+      limitedBy: "smallest-drill",
+      unattainable: smallestM2 - target > tolerance,
+      message: `The target is below what one ${smallestDrill.label} hole gives, the smallest drill the shop allows.`,
+    };
+  }
+  return { candidates: out, reach, limitedBy: null, unattainable: false, message: null };
 
   function candidate(drill: Drill, count: number, fits: boolean): HoleLayoutCandidate {
     const holesAreaM2 = count * QUARTER_PI * drill.diameterM * drill.diameterM;
-    const effectiveAreaM2 =
-      window === 0 ? holesAreaM2 : (holesAreaM2 * window) / Math.sqrt(holesAreaM2 * holesAreaM2 + windowSquared);
+    const effectiveAreaM2 = effectiveOf(holesAreaM2);
     const errorM2 = effectiveAreaM2 - target;
     return {
       count,

@@ -15,6 +15,7 @@
 // as an area is that area; both still count as open area for the stages above them.
 
 import { solveHoleLayout, type HoleLayoutCandidate } from "./hole-layout";
+import type { RestrictionDrillLimits } from "./restriction-limits";
 import { circleArea } from "./orifice";
 import { suppliedAreaAt, type CarburetorSide, type PowerValve, type ThrottleMode } from "./staging";
 import type { PlanWarning } from "./plan-warnings";
@@ -113,6 +114,7 @@ export function jetAreaOf(mainJetDiameterM: number, mainJetCount: number): numbe
 export function sizeStages(input: {
   blocks: readonly SizedBlock[];
   drills: readonly Drill[];
+  limits?: RestrictionDrillLimits | undefined;
   minWebM?: number | undefined;
 }): { stages: StagePlan[]; valves: PowerValve[] } {
   const mainJets = mainJetsBySide(input.blocks);
@@ -150,7 +152,7 @@ export function sizeStages(input: {
         break;
     }
     if (!(targetAreaM2 > 0)) throw new RangeError(`stage ${stage.id}: the area to add must be positive`);
-    const plan = pickLayout({ stage, block, mode, openingGaugePa, basis, basisAreaM2, extra, targetAreaM2, drills: input.drills, minWebM: input.minWebM });
+    const plan = pickLayout({ stage, block, mode, openingGaugePa, basis, basisAreaM2, extra, targetAreaM2, drills: input.drills, limits: input.limits, minWebM: input.minWebM });
     stages.push(plan);
     valves.push(stageValve(stage, block.side, plan.chosen.effectiveAreaM2));
   }
@@ -167,17 +169,20 @@ function pickLayout(a: {
   extra: number;
   targetAreaM2: number;
   drills: readonly Drill[];
+  limits?: RestrictionDrillLimits | undefined;
   minWebM?: number | undefined;
 }): StagePlan {
   const { stage, block } = a;
-  const ranked = solveHoleLayout({
+  const solved = solveHoleLayout({
     targetEffectiveAreaM2: a.targetAreaM2,
     drills: a.drills,
+    limits: a.limits,
     maxHoles: stage.maxHoles,
     valveWindowAreaM2: stage.valveWindowAreaM2,
     channelLengthM: block.channelLengthM,
     minWebM: block.minWebM ?? a.minWebM,
   });
+  const ranked = solved.candidates;
   const best = ranked[0];
   if (!best) throw new RangeError("drills: no drill to choose from within the shop's limits");
   const wanted = stage.chosen;
@@ -193,11 +198,14 @@ function pickLayout(a: {
       ...about,
     });
   }
+  if (solved.unattainable && solved.message) {
+    warnings.push({ code: "target_unattainable", level: "warning", message: `No layout the shop can drill reaches the area this stage needs: ${solved.message}`, ...about });
+  }
   if (!chosen.fits) warnings.push({ code: "holes_do_not_fit", level: "warning", message: "The holes do not fit the channel with the least web between them.", ...about });
   if (chosen.valveLimited) {
     warnings.push({ code: "valve_limited", level: "caution", message: "The valve's own flow window limits this stage: more hole area adds little.", ...about });
   }
-  if (Math.abs(chosen.errorPct) > 10) {
+  if (Math.abs(chosen.errorPct) > 10 && !solved.unattainable) {
     warnings.push({
       code: "layout_misses_target",
       level: chosen.errorPct < 0 ? "warning" : "caution",

@@ -978,7 +978,7 @@ export function proposeStaging(input: StagingProposalInput): StagingProposal {
         channelLengthM: input.layout.channelLengthM,
         minWebM: input.layout.minWebM,
         limit: 1,
-      });
+      }).candidates;
       holes[v] = best;
       state.area[v] = best?.effectiveAreaM2 ?? 0;
     }

@@ -158,6 +158,6 @@ function holesFor(input: TuningCorrectionInput, valveId: string, areaM2: number)
     minWebM: layout.minWebM,
     valveWindowAreaM2: typeof window === "number" || window === undefined ? window : window[valveId],
     limit: 1,
-  });
+  }).candidates;
   return best;
 }

@@ -6,7 +6,7 @@ import { PATCH as patchUserRoute } from "@/app/api/users/[id]/route";
 import { createUserAction, updateUserAction } from "@/app/(office)/shop/users/actions";
 import { createJobAction } from "@/app/(office)/jobs/new/actions";
 import { createCustomerAction, updateCustomerAction } from "@/app/(office)/shop/customers/actions";
-import { setDrillStockedAction, setDrillSystemStockedAction } from "@/app/(office)/shop/drills/actions";
+import { saveShopLimitsAction, setDrillStockedAction, setDrillSystemStockedAction } from "@/app/(office)/shop/drills/actions";
 import { createCustomer } from "@/db/customers";
 import { settle } from "./support/redirect";
 import { GET as listJobsRoute, POST as createJobRoute } from "@/app/api/jobs/route";
@@ -259,6 +259,17 @@ const CASES: AccessCase[] = [
     name: "action setDrillSystemStockedAction",
     expected: ADMIN_ONLY(200),
     call: async () => (await setDrillSystemStockedAction(undefined, formData({ system: "number", stocked: "true" }))).httpStatus,
+  },
+  {
+    name: "action saveShopLimitsAction",
+    expected: ADMIN_ONLY(200),
+    call: async () =>
+      (
+        await saveShopLimitsAction(
+          undefined,
+          formData({ smallestRestrictionDrill: "#60", largestRestrictionDrill: "3/32", "minWeb.value": "0.025", "minWeb.unit": "in" }),
+        )
+      ).httpStatus,
   },
   {
     name: "action chooseLayoutAction",

@@ -31,6 +31,8 @@ describe("orifice properties", () => {
 });
 
 describe("hole layout properties", () => {
+  // Every drill of every series may be used here: the ranking rules, not the shop's limits, are under test.
+  const anyDrill = { system: "mixed", smallestDrillM: 1e-6, largestDrillM: 1 } as const;
   const layoutInput = fc.record({
     target: positive(1e-8, 2e-5),
     maxHoles: fc.integer({ min: 1, max: 4 }),
@@ -42,7 +44,7 @@ describe("hole layout properties", () => {
   it("more holes of one drill never give less effective area", () => {
     fc.assert(
       fc.property(layoutInput, ({ target, maxHoles, window }) => {
-        const all = solveHoleLayout({ targetEffectiveAreaM2: target, drills: ALL_DRILLS, maxHoles, valveWindowAreaM2: window });
+        const all = solveHoleLayout({ targetEffectiveAreaM2: target, drills: ALL_DRILLS, maxHoles, valveWindowAreaM2: window, limits: anyDrill }).candidates;
         const byDrill = new Map<string, HoleLayoutCandidate[]>();
         for (const c of all) byDrill.set(c.drill.label, [...(byDrill.get(c.drill.label) ?? []), c]);
         for (const list of byDrill.values()) {
@@ -66,7 +68,8 @@ describe("hole layout properties", () => {
           valveWindowAreaM2: window,
           channelLengthM: channel,
           minWebM: web,
-        });
+          limits: anyDrill,
+        }).candidates;
         expect(ranked).toHaveLength(ALL_DRILLS.length * maxHoles);
         // Oracle written here from the definitions: hole area n pi d²/4, series with the window, the fit rule
         // n d + (n - 1) web <= channel.
@@ -75,7 +78,8 @@ describe("hole layout properties", () => {
           for (let n = 1; n <= maxHoles; n++) {
             const holes = (n * Math.PI * drill.diameterM ** 2) / 4;
             const effective = window === undefined ? holes : 1 / Math.sqrt(1 / holes ** 2 + 1 / window ** 2);
-            const fits = channel === undefined || n * drill.diameterM + (n - 1) * (web ?? 0) <= channel;
+            // Web left unset: 0.020 in (common practice, no published source).
+            const fits = channel === undefined || n * drill.diameterM + (n - 1) * (web ?? 0.02 * 0.0254) <= channel;
             if (fits) bestFittingError = Math.min(bestFittingError, Math.abs(effective - target));
           }
         }
@@ -101,6 +105,26 @@ describe("hole layout properties", () => {
           expect(a.count).toBeLessThanOrEqual(b.count);
           if (a.count === b.count) expect(a.drill.diameterM).toBeGreaterThanOrEqual(b.drill.diameterM);
         }
+      }),
+      { numRuns: 100 },
+    );
+  });
+});
+
+describe("hole layout within a shop's limits", () => {
+  it("offers only drills of the plan's system between its smallest and largest drill", () => {
+    const sizes = fc.uniqueArray(fc.integer({ min: 0, max: ALL_DRILLS.length - 1 }), { minLength: 2, maxLength: 2 });
+    fc.assert(
+      fc.property(positive(1e-8, 2e-5), fc.integer({ min: 1, max: 4 }), fc.constantFrom("inch" as const, "metric" as const, "mixed" as const), sizes, (target, maxHoles, system, pair) => {
+        const [a, b] = pair.map((i) => ALL_DRILLS[i]!.diameterM).sort((x, y) => x - y) as [number, number];
+        const result = solveHoleLayout({ targetEffectiveAreaM2: target, drills: ALL_DRILLS, maxHoles, limits: { system, smallestDrillM: a, largestDrillM: b } });
+        for (const c of result.candidates) {
+          expect(c.drill.diameterM).toBeGreaterThanOrEqual(a - 1e-9);
+          expect(c.drill.diameterM).toBeLessThanOrEqual(b + 1e-9);
+          if (system === "inch") expect(c.drill.system).not.toBe("metric");
+          if (system === "metric") expect(c.drill.system).toBe("metric");
+        }
+        if (result.candidates.length === 0) expect(result.limitedBy).toBe("no-drill");
       }),
       { numRuns: 100 },
     );

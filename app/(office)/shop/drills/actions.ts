@@ -2,10 +2,13 @@
 
 import { revalidatePath } from "next/cache";
 import { setDrillStocked, setSystemStocked } from "@/db/drill-stock";
+import { updateShopSettings } from "@/db/shop-settings";
+import { toSI } from "@/lib/engineering/units";
 import { runFormAction, type FormResult } from "@/lib/form-action";
-import { drillStockSchema, drillSystemStockSchema } from "./schema";
+import { drillStockSchema, drillSystemStockSchema, shopLimitsSchema } from "./schema";
 
-// Only an admin changes the rack. The solver reads it afresh for every plan, so nothing else is refreshed.
+// Only an admin changes the rack and the restriction limits. The solver reads both afresh for every plan, so
+// nothing else is refreshed.
 
 export async function setDrillStockedAction(_previous: FormResult | undefined, formData: FormData): Promise<FormResult> {
   return runFormAction(formData, {
@@ -27,6 +30,23 @@ export async function setDrillSystemStockedAction(_previous: FormResult | undefi
       const count = await setSystemStocked(user.id, system, stocked);
       revalidatePath("/shop/drills");
       return stocked ? `All ${count} ${system} drills are on the rack.` : `The ${system} drills are off the rack.`;
+    },
+  });
+}
+
+export async function saveShopLimitsAction(_previous: FormResult | undefined, formData: FormData): Promise<FormResult> {
+  return runFormAction(formData, {
+    schema: shopLimitsSchema,
+    roles: ["admin"],
+    resetForm: false,
+    async work({ smallestRestrictionDrill, largestRestrictionDrill, minWeb }, user) {
+      await updateShopSettings(user.id, {
+        smallestRestrictionDrill: smallestRestrictionDrill ?? null,
+        largestRestrictionDrill: largestRestrictionDrill ?? null,
+        minWebM: minWeb === undefined ? null : toSI("length", minWeb.value, minWeb.unit),
+      });
+      revalidatePath("/shop/drills");
+      return "Restriction limits saved. Plans solved from now on keep to them.";
     },
   });
 }

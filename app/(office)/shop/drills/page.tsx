@@ -1,11 +1,18 @@
 import type { Metadata } from "next";
 import { listStockedLabels } from "@/db/drill-stock";
+import { getShopSettings } from "@/db/shop-settings";
 import { OFFICE_ROLES, requireRole } from "@/lib/auth/session";
 import { fixed } from "@/lib/display";
-import { ALL_DRILLS } from "@/lib/engineering/drills";
+import { ALL_DRILLS, findDrill } from "@/lib/engineering/drills";
+import {
+  DEFAULT_LARGEST_RESTRICTION_DRILL_LABEL,
+  DEFAULT_MIN_WEB_M,
+  DEFAULT_SMALLEST_RESTRICTION_DRILL_LABEL,
+} from "@/lib/engineering/restriction-limits";
 import type { DrillSystem } from "@/lib/engineering/types";
-import { PageHeader } from "@/components/ui/sheet";
+import { PageHeader, Sheet } from "@/components/ui/sheet";
 import { DrillRack, type RackGroup } from "./drill-rack";
+import { ShopLimits, type ShopLimitsValues } from "./limits-form";
 import { RACK_SYSTEMS } from "./schema";
 
 export const metadata: Metadata = { title: "Drill rack" };
@@ -21,9 +28,36 @@ const M_PER_IN = 0.0254;
 
 export default async function DrillRackPage() {
   const user = await requireRole(OFFICE_ROLES, "/shop/drills");
-  const stocked = await listStockedLabels();
-  const size = (diameterM: number) =>
-    user.lengthUnit === "mm" ? `${fixed(diameterM * 1000, 3)} mm` : `${fixed(diameterM / M_PER_IN, 4)} in`;
+  const [stocked, settings] = await Promise.all([listStockedLabels(), getShopSettings()]);
+  const number = (lengthM: number) => (user.lengthUnit === "mm" ? fixed(lengthM * 1000, 3) : fixed(lengthM / M_PER_IN, 4));
+  const size = (diameterM: number) => `${number(diameterM)} ${user.lengthUnit}`;
+  const drillShown = (label: string) => {
+    const drill = findDrill(label);
+    return drill ? `${label} (${size(drill.diameterM)})` : label;
+  };
+  const limits: ShopLimitsValues = {
+    smallestRestrictionDrill: {
+      shown: drillShown(settings.smallestRestrictionDrill),
+      isDefault: settings.isDefault.smallestRestrictionDrill,
+      stored: settings.isDefault.smallestRestrictionDrill ? "" : settings.smallestRestrictionDrill,
+    },
+    largestRestrictionDrill: {
+      shown: drillShown(settings.largestRestrictionDrill),
+      isDefault: settings.isDefault.largestRestrictionDrill,
+      stored: settings.isDefault.largestRestrictionDrill ? "" : settings.largestRestrictionDrill,
+    },
+    minWeb: {
+      shown: size(settings.minWebM),
+      isDefault: settings.isDefault.minWebM,
+      // Six significant figures, so saving the form again does not round a web typed in the other unit.
+      stored: settings.isDefault.minWebM ? "" : String(Number((settings.minWebM / (user.lengthUnit === "mm" ? 0.001 : M_PER_IN)).toPrecision(6))),
+    },
+    defaults: {
+      smallestRestrictionDrill: drillShown(DEFAULT_SMALLEST_RESTRICTION_DRILL_LABEL),
+      largestRestrictionDrill: drillShown(DEFAULT_LARGEST_RESTRICTION_DRILL_LABEL),
+      minWeb: size(DEFAULT_MIN_WEB_M),
+    },
+  };
   const groups: RackGroup[] = RACK_SYSTEMS.map((system) => {
     const drills = ALL_DRILLS.filter((d) => d.system === system);
     const smallest = drills[0]?.label ?? "";
@@ -42,6 +76,19 @@ export default async function DrillRackPage() {
         The drills the shop has on hand. The planner picks restriction holes from these every time it solves a job, unless the
         job is set to use every standard drill. Sizes are nominal, smallest first in each series.
       </p>
+      <Sheet title="Restriction limits" className="mb-6">
+        <p className="mb-4 max-w-3xl text-sm text-graphite">
+          The planner drills channel restrictions only with drills from the smallest to the largest size here, of the job&apos;s
+          drill system, and keeps the least web of metal between neighbouring holes. When a target lies beyond these limits the
+          plan says so instead of offering a layout the shop would not drill.
+        </p>
+        <ShopLimits
+          values={limits}
+          groups={groups.map((g) => ({ title: g.title, drills: g.drills }))}
+          unit={user.lengthUnit}
+          canEdit={user.role === "admin"}
+        />
+      </Sheet>
       <DrillRack groups={groups} stocked={[...stocked]} canEdit={user.role === "admin"} />
     </>
   );

@@ -3,6 +3,7 @@ import { apiError, invalidInput, readJson } from "@/lib/api";
 import { areaIn2, drillDto, tidy } from "@/lib/calc-dto";
 import { ALL_DRILLS, drillsFromLabels } from "@/lib/engineering/drills";
 import { MAX_HOLES_PER_CHANNEL, solveHoleLayout } from "@/lib/engineering/hole-layout";
+import { DEFAULT_RESTRICTION_DRILL_LIMITS } from "@/lib/engineering/restriction-limits";
 import { toSI } from "@/lib/engineering/units";
 import { nonNegativeNumber, positiveNumber } from "@/lib/quantity-schema";
 
@@ -43,12 +44,14 @@ export async function POST(request: Request) {
   const candidates = solveHoleLayout({
     targetEffectiveAreaM2: body.targetAreaIn2 !== undefined ? toSI("area", body.targetAreaIn2, "in²") : toSI("area", body.targetAreaMm2!, "mm²"),
     drills,
+    // Drills named by the caller are used as given, in any system; the default list keeps to the inch series.
+    limits: { ...DEFAULT_RESTRICTION_DRILL_LIMITS, system: body.drills ? "mixed" : "inch" },
     maxHoles: body.maxHoles,
     valveWindowAreaM2: body.valveAreaIn2 === undefined ? undefined : toSI("area", body.valveAreaIn2, "in²"),
     channelLengthM: inches(body.channelLengthIn),
     minWebM: inches(body.minWebIn),
     limit: body.limit ?? 50,
-  });
+  }).candidates;
   return Response.json({
     candidates: candidates.map((c) => ({
       count: c.count,

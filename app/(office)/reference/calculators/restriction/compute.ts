@@ -3,6 +3,7 @@ import { areaPair, drillDto, tidy, type AreaPair, type DrillDto } from "@/lib/ca
 import { ALL_DRILLS, FRACTION_DRILLS, INCH_DRILLS, METRIC_DRILLS, NUMBER_DRILLS } from "@/lib/engineering/drills";
 import { extraFuelFromAfr, mainJetArea } from "@/lib/engineering/enrichment";
 import { solveHoleLayout } from "@/lib/engineering/hole-layout";
+import { DEFAULT_RESTRICTION_DRILL_LIMITS, type PlanDrillSystem } from "@/lib/engineering/restriction-limits";
 import type { Drill } from "@/lib/engineering/types";
 import { toSI } from "@/lib/engineering/units";
 import { refuseOutOfRange } from "../refusal";
@@ -14,6 +15,15 @@ const DRILLS: Record<(typeof DRILL_SETS)[number], readonly Drill[]> = {
   fraction: FRACTION_DRILLS,
   metric: METRIC_DRILLS,
   all: ALL_DRILLS,
+};
+
+// "All drills" is the one set that mixes inch and metric sizes; the solver keeps to one system unless told.
+const SYSTEMS: Record<(typeof DRILL_SETS)[number], PlanDrillSystem> = {
+  inch: "inch",
+  number: "inch",
+  fraction: "inch",
+  metric: "metric",
+  all: "mixed",
 };
 
 /** Candidates shown: enough to compare, few enough to read. */
@@ -54,12 +64,13 @@ export function computeRestriction(input: RestrictionInput): RestrictionResultDt
     const candidates = solveHoleLayout({
       targetEffectiveAreaM2: targetM2,
       drills: DRILLS[input.drillSet],
+      limits: { ...DEFAULT_RESTRICTION_DRILL_LIMITS, system: SYSTEMS[input.drillSet] },
       maxHoles: input.maxHoles,
       valveWindowAreaM2: input.valveWindow && area(input.valveWindow),
       channelLengthM: input.channelLength && length(input.channelLength),
       minWebM: input.minWeb && length(input.minWeb),
       limit: SHOWN_CANDIDATES,
-    });
+    }).candidates;
     return {
       target: areaPair(targetM2),
       enrichmentPct: fraction === null ? null : tidy(fraction * 100, 3),
