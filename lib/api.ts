@@ -1,9 +1,9 @@
 import "server-only";
 import { NextResponse } from "next/server";
 import type { z } from "zod";
-import { RequestRefusal } from "@/lib/errors";
+import { RequestRefusal, type UnprocessableCode } from "@/lib/errors";
 
-export type ApiErrorCode = "invalid_input" | "unauthenticated" | "forbidden" | "not_found" | "conflict" | "internal";
+export type ApiErrorCode = "invalid_input" | "unauthenticated" | "forbidden" | "not_found" | "conflict" | "internal" | UnprocessableCode;
 
 export interface ApiError {
   error: { code: ApiErrorCode; message: string; field?: string; issues?: { field: string; message: string }[] };
@@ -37,7 +37,9 @@ export async function readJson(request: Request): Promise<ParsedJson> {
 export function refusalResponse(error: unknown) {
   if (error instanceof RequestRefusal) {
     const code: ApiErrorCode =
-      error.status === 404 ? "not_found" : error.status === 409 ? "conflict" : error.status === 403 ? "forbidden" : "invalid_input";
+      error.code !== undefined
+        ? error.code
+        : error.status === 404 ? "not_found" : error.status === 409 ? "conflict" : error.status === 403 ? "forbidden" : "invalid_input";
     return apiError(error.status, code, error.field ? `${error.field}: ${error.message}` : error.message, { field: error.field });
   }
   console.error(error);

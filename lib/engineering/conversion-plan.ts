@@ -293,7 +293,7 @@ function planBlock(block: BlockInput, drills: readonly Drill[], inchDrills: read
   const mainJetAreaM2 = block.mainJetCount * circleArea(block.mainJetDiameterM);
   const stages = block.stages.map((stage) => planStage(stage, block, mainJetAreaM2, drills));
   const warnings = stages.flatMap((s) => s.warnings);
-  const plug = block.passage
+  const plugResult = block.passage
     ? passagePlug({
         passageDiameterM: block.passage.diameterM,
         wallThicknessM: block.passage.wallM,
@@ -302,6 +302,8 @@ function planBlock(block: BlockInput, drills: readonly Drill[], inchDrills: read
         drills: inchDrills.length ? inchDrills : undefined,
       })
     : undefined;
+  const plug = plugResult?.ok ? plugResult.plug : undefined;
+  if (plugResult && !plugResult.ok) warnings.push(plugResult.message);
   if (plug) warnings.push(...plug.warnings);
   const grind = block.grind
     ? planGrind({

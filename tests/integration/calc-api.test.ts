@@ -51,6 +51,10 @@ describe("GET /api/calc/tap-drill", () => {
       ["?thread=banana", "thread"],
       ["?thread=4-40&engagement=0", "engagement"],
       ["?thread=4-40&engagement=lots", "engagement"],
+      // ASME B1.1: 4-40 basic minor 0.112 - 1.082532 x 0.025 = 0.08494 in, i.e. 0.02706 / 0.03248 = 83.3 %;
+      // 100 % would ask for 0.112 - 0.03248 = 0.0795 in, a #47 (0.0785) under the root
+      ["?thread=4-40&engagement=100", "engagement"],
+      ["?thread=4-40&engagement=83.4", "engagement"],
     ] as const) {
       const response = await tapDrillRoute(get(`/api/calc/tap-drill${query}`));
       expect(response.status, query).toBe(400);

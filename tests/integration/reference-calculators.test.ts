@@ -84,6 +84,9 @@ describe("tapDrillAction", () => {
     await refused(tapDrillAction, { thread: "4-41", engagement: "75" }, "thread");
     await refused(tapDrillAction, { thread: "4-40", engagement: "0" }, "engagement");
     await refused(tapDrillAction, { thread: "4-40", engagement: "lots" }, "engagement");
+    // ASME B1.1: a drill at the basic minor diameter D - 1.082532 P gives 1.082532 / 1.299038 = 83.3 %
+    await refused(tapDrillAction, { thread: "4-40", engagement: "100" }, "engagement");
+    await refused(tapDrillAction, { thread: "4-40", engagement: "84" }, "engagement");
   });
 });
 
@@ -94,7 +97,6 @@ describe("passagePlugAction", () => {
     // (0.099 - 0.089) / (1.299038 / 48) = 37 %, under the 60 % band; #4-40 with #43 gives 70.8 %.
     expect(plug.thread.label).toBe("#4-40 UNC");
     expect(plug.drill.label).toBe("#43");
-    expect(plug.cleansUp).toBe(true);
     // Tap depth 1.5 x 0.112 = 0.168 in; drill depth 0.168 + 3 x 0.025 = 0.243 in.
     expect(plug.tapDepth.in).toBeCloseTo(0.168, 6);
     expect(plug.drillDepth.in).toBeCloseTo(0.243, 6);
@@ -105,7 +107,17 @@ describe("passagePlugAction", () => {
     expect(plug.warnings).toEqual([]);
   });
 
+  it("answers 422 when no thread in the tables plugs the passage", async () => {
+    // A 0.500 in passage: the largest Unified thread, 1/2-20, needs a drill of at most
+    // 0.500 - 0.6 x 1.299038 / 20 = 0.4610 in for 60 % engagement (ASME B1.1 sizes), so none cleans it up.
+    const result = await run(passagePlugAction, withFields(PASSAGE_PLUG_FORM, { "passage.value": "0.500", "passage.unit": "in" }));
+    expect(result.httpStatus).toBe(422);
+    expect(result.data).toBeUndefined();
+    expect(result.error?.[""]?.join(" ")).toMatch(/0\.5000 in passage.*too large/);
+  });
+
   it("names the field that is wrong", async () => {
+    await refused(passagePlugAction, withFields(PASSAGE_PLUG_FORM, { engagement: "90" }), "engagement");
     await refused(passagePlugAction, withFields(PASSAGE_PLUG_FORM, { "passage.value": "" }), "passage.value");
     await refused(passagePlugAction, withFields(PASSAGE_PLUG_FORM, { "passage.unit": "furlong" }), "passage.unit");
     await refused(passagePlugAction, withFields(PASSAGE_PLUG_FORM, { "wall.value": "-1" }), "wall.value");

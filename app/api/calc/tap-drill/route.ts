@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { invalidInput } from "@/lib/api";
 import { drillDto, tidy } from "@/lib/calc-dto";
-import { parseThread, tapDrill } from "@/lib/engineering/threads";
+import { MAX_TAP_ENGAGEMENT_PCT, parseThread, tapDrill } from "@/lib/engineering/threads";
 import { fromSI } from "@/lib/engineering/units";
 
 const querySchema = z.object({
@@ -13,7 +13,9 @@ const querySchema = z.object({
   engagement: z.coerce
     .number({ error: "engagement must be a percentage" })
     .gt(0, { error: "engagement must be above 0 %" })
-    .max(100, { error: "engagement must be at most 100 %" })
+    .max(MAX_TAP_ENGAGEMENT_PCT + 1e-9, {
+      error: `engagement must be at most ${MAX_TAP_ENGAGEMENT_PCT.toFixed(1)} %: a drill under the thread's basic minor diameter leaves metal the tap cannot cut`,
+    })
     .default(75),
   allowOtherSystem: z.enum(["true", "false"], { error: "allowOtherSystem must be true or false" }).optional(),
 });

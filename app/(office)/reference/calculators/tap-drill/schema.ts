@@ -1,9 +1,12 @@
 import { z } from "zod";
-import { parseThread } from "@/lib/engineering/threads";
+import { MAX_TAP_ENGAGEMENT_PCT, parseThread } from "@/lib/engineering/threads";
 import { formNumber, formQuantity, optionalFormQuantity } from "@/lib/form-schema";
 import { FORM_LENGTH_UNITS } from "@/lib/form-units";
 
-const engagement = formNumber("thread engagement", { min: 0, max: 100 });
+/** Up to the basic minor diameter's 83.3 %: a smaller drill leaves metal under the thread's root (ASME B1.1). */
+const engagement = formNumber("thread engagement", { min: 0 }).max(MAX_TAP_ENGAGEMENT_PCT + 1e-9, {
+  error: `The thread engagement must be at most ${MAX_TAP_ENGAGEMENT_PCT.toFixed(1)} %: a drill under the thread's basic minor diameter leaves metal the tap cannot cut.`,
+});
 
 /** Tap drill for a thread at a chosen engagement. */
 export const tapDrillSchema = z.object({
