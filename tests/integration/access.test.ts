@@ -37,6 +37,7 @@ import { grindPlanAction } from "@/app/(office)/reference/calculators/grind/acti
 import { pickupTubeAction } from "@/app/(office)/reference/calculators/pickup-tube/actions";
 import { stagingAction } from "@/app/(office)/reference/calculators/staging/actions";
 import * as referenceForms from "./support/reference-forms";
+import { POST as passagePlugRoute } from "@/app/api/calc/passage-plug/route";
 import { blocksBody } from "./support/jobs";
 
 async function machinistId(): Promise<string> {
@@ -55,6 +56,10 @@ interface AccessCase {
 const OFFICE_ONLY = (ok: number): Record<Actor, number> => ({ anonymous: 401, machinist: 403, tuner: ok, admin: ok });
 const EVERYONE = (ok: number): Record<Actor, number> => ({ anonymous: 401, machinist: ok, tuner: ok, admin: ok });
 const jobParams = (id: string) => ({ params: Promise.resolve({ id }) });
+
+/** The calculator API holds no shop data: anyone may call it, signed in or not. */
+const PUBLIC = (ok: number): Record<Actor, number> => ({ anonymous: ok, machinist: ok, tuner: ok, admin: ok });
+const inch = (value: number) => ({ value, unit: "in" });
 
 const ADMIN_ONLY = (ok: number): Record<Actor, number> => ({ anonymous: 401, machinist: 403, tuner: 403, admin: ok });
 
@@ -297,6 +302,13 @@ const CASES: AccessCase[] = [
       const outcome = await settle(saveBlocksAction(id, undefined, nestedFormData(blocksBody())));
       return outcome.redirectTo === `/jobs/${id}` ? 303 : outcome.result!.httpStatus;
     },
+  },
+  {
+    name: "POST /api/calc/passage-plug",
+    expected: PUBLIC(200),
+    call: async () =>
+      (await passagePlugRoute(jsonRequest("/api/calc/passage-plug", "POST", { passageDiameter: inch(0.085), wall: inch(0.25), depth: inch(0.5) })))
+        .status,
   },
   // Reference calculators: every role may use them; they read and write nothing but the user's unit choice.
   {

@@ -5,6 +5,7 @@ import { GET as drillsRoute } from "@/app/api/calc/drills/route";
 import { GET as tapDrillRoute } from "@/app/api/calc/tap-drill/route";
 import { POST as orificeRoute } from "@/app/api/calc/orifice/route";
 import { POST as restrictionRoute } from "@/app/api/calc/restriction/route";
+import { POST as passagePlugRoute } from "@/app/api/calc/passage-plug/route";
 import { jsonRequest } from "./support/database";
 
 const get = (path: string) => new Request(`http://127.0.0.1${path}`);
@@ -143,7 +144,10 @@ describe("POST /api/calc/restriction", () => {
     const cases: [unknown, string][] = [
       [{ maxHoles: 2 }, "targetAreaIn2"],
       [{ targetAreaIn2: 0.01, maxHoles: 5 }, "maxHoles"],
-      [{ targetAreaIn2: 0.01, maxHoles: 2, drills: ["#43", "#99"] }, "drills"],
+      [{ targetAreaIn2: 0.01, maxHoles: 2, drills: ["#43", "#99"] }, "drills.1"],
+      // a bare number says no series: #2, 2 mm or 2 in?
+      [{ targetAreaIn2: 0.01, maxHoles: 2, drills: ["2"] }, "drills.0"],
+      [{ targetAreaIn2: 0.01, maxHoles: 2, drills: ["#43", "2.5"] }, "drills.1"],
       [{ targetAreaMm2: "big", maxHoles: 2 }, "targetAreaMm2"],
     ];
     for (const [body, field] of cases) {
@@ -202,5 +206,65 @@ describe("every calculator endpoint answers 400, never 500, to malformed input",
       }),
       { numRuns: 200 },
     );
+  });
+});
+
+describe("POST /api/calc/passage-plug", () => {
+  const inch = (value: number) => ({ value, unit: "in" });
+  const body = { passageDiameter: inch(0.085), wall: inch(0.25), depth: inch(0.5), threads: ["4-40", "M4x0.7"], drills: ["#43", "#50", "2.5 mm"] };
+  const post = (b: unknown) => passagePlugRoute(jsonRequest("/api/calc/passage-plug", "POST", b));
+
+  it("plugs a 0.085 in passage with 4-40 and a #43", async () => {
+    const response = await post(body);
+    expect(response.status).toBe(200);
+    const { plug } = await response.json();
+    expect(plug.thread).toEqual({ label: "#4-40 UNC" });
+    // ASME B94.11M: #43 = 0.0890 in = 2.2606 mm
+    expect(plug.drill).toEqual({ label: "#43", inch: 0.089, mm: 2.2606 });
+    // (0.112 - 0.089) / (1.299038 x 0.025) x 100 = 70.82 %
+    expect(plug.engagementPct).toBeCloseTo(70.82, 1);
+    // 1.5 x 0.112 = 0.168 in of thread, + 3 x 0.025 of tap lead = 0.243 in (common practice)
+    expect(plug.tapDepthIn).toBeCloseTo(0.168, 6);
+    expect(plug.drillDepthIn).toBeCloseTo(0.243, 6);
+    // longest stocked set screw not over 0.168 - 0.025 = 0.143 in: 1/8 in (ASME B18.3 practice, from memory)
+    expect(plug.setScrew).toEqual({ label: "#4-40 UNC x 1/8 in" });
+    // 0.25 - (0.112 - 0.085) / 2 = 0.2365 in
+    expect(plug.wallLeftIn).toBeCloseTo(0.2365, 6);
+  });
+
+  it("answers 422 no_plug naming the drill the shop lacks", async () => {
+    // #50 (0.0700) and #52 (0.0635), ASME B94.11M: neither cleans up 0.085 in; 4-40 would take a #43
+    const response = await post({ ...body, threads: ["4-40"], drills: ["#50", "#52"] });
+    expect(response.status).toBe(422);
+    const { error } = await response.json();
+    expect(error.code).toBe("no_plug");
+    expect(error.message).toMatch(/largest is #50.*#4-40 UNC with a #43/);
+  });
+
+  it("answers 422 no_plug naming the thread the shop lacks", async () => {
+    // 0.140 in passage, 6-32 (0.138 in major) offered: no thread forms. 10-24 with a #25 (0.1495 in):
+    // (0.190 - 0.1495) / (1.299038 / 24) = 74.8 %
+    const response = await post({ ...body, passageDiameter: inch(0.14), threads: ["6-32"], drills: undefined });
+    expect(response.status).toBe(422);
+    const { error } = await response.json();
+    expect(error).toMatchObject({ code: "no_plug" });
+    expect(error.message).toMatch(/#10-24 UNC with a #25/);
+  });
+
+  it("names the field that is wrong", async () => {
+    const cases: [unknown, string][] = [
+      [{ ...body, passageDiameter: undefined }, "passageDiameter"],
+      [{ ...body, wall: inch(-1) }, "wall.value"],
+      [{ ...body, depth: { value: 1, unit: "furlong" } }, "depth.unit"],
+      [{ ...body, drills: ["2"] }, "drills.0"],
+      [{ ...body, drills: ["#43", "2.5"] }, "drills.1"],
+      [{ ...body, threads: ["4-41"] }, "threads.0"],
+      [{ ...body, engagement: 100 }, "engagement"],
+    ];
+    for (const [b, field] of cases) {
+      const response = await post(b);
+      expect(response.status, JSON.stringify(b)).toBe(400);
+      expect((await response.json()).error.field, JSON.stringify(b)).toBe(field);
+    }
   });
 });
