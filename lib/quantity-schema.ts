@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { drillLabelProblem, findDrill } from "@/lib/engineering/drills";
+import { LARGEST_FIGURE, SMALLEST_FIGURE } from "@/lib/form-schema";
 import type { FuelSpec } from "@/lib/engineering/fuels";
 import { parseThread, type Thread } from "@/lib/engineering/threads";
 import type { Drill } from "@/lib/engineering/types";
@@ -15,7 +16,23 @@ import {
 // zod pieces for inputs that carry their unit, shared by the JSON API and the forms.
 
 const finite = (field: string) =>
-  z.number({ error: `${field} must be a number` }).refine(Number.isFinite, { error: `${field} must be a finite number` });
+  z
+    .number({ error: `${field} must be a number` })
+    .refine(Number.isFinite, { error: `${field} must be a finite number` })
+    .refine((v) => Math.abs(v) <= LARGEST_FIGURE, { error: `${field} is far larger than any carburetor job needs: check the number` })
+    .refine((v) => v === 0 || Math.abs(v) >= SMALLEST_FIGURE, { error: `${field} is too small to be a measured figure: check the number` });
+
+/** Liquid fuels from gasoline (about 745 kg/m³) to methanol (about 792) and beyond sit well inside 500-1500 kg/m³. */
+export const FUEL_DENSITY_RANGE_KG_M3 = { min: 500, max: 1500 } as const;
+
+/** A fuel density in kg/m³; a figure typed in g/cm³ (0.745) is refused with the conversion. */
+export const fuelDensity = (field: string) =>
+  finite(field).superRefine((v, ctx) => {
+    const { min, max } = FUEL_DENSITY_RANGE_KG_M3;
+    if (v >= min && v <= max) return;
+    const hint = v > 0.5 && v < 1.5 ? `: ${v} looks like g/cm³, which is ${Number((v * 1000).toFixed(3))} kg/m³` : "";
+    ctx.addIssue({ code: "custom", message: `${field} must be between ${min} and ${max} kg/m³${hint}` });
+  });
 
 export const positiveNumber = (field: string) => finite(field).refine((v) => v > 0, { error: `${field} must be greater than 0` });
 export const nonNegativeNumber = (field: string) => finite(field).refine((v) => v >= 0, { error: `${field} must be 0 or more` });
@@ -55,7 +72,7 @@ export const fuelSchema = z.union(
       }),
     z.object({
       kind: z.literal("custom"),
-      densityKgM3: positiveNumber("fuel.densityKgM3"),
+      densityKgM3: fuelDensity("fuel.densityKgM3"),
       stoichAfr: positiveNumber("fuel.stoichAfr"),
     }),
   ],

@@ -56,6 +56,8 @@ describe("GET /api/calc/tap-drill", () => {
       // 100 % would ask for 0.112 - 0.03248 = 0.0795 in, a #47 (0.0785) under the root
       ["?thread=4-40&engagement=100", "engagement"],
       ["?thread=4-40&engagement=83.4", "engagement"],
+      ["?thread=4-40&engagement=5e-324", "engagement"],
+      ["?thread=4-40&engagement=1e999", "engagement"],
     ] as const) {
       const response = await tapDrillRoute(get(`/api/calc/tap-drill${query}`));
       expect(response.status, query).toBe(400);
@@ -266,5 +268,58 @@ describe("POST /api/calc/passage-plug", () => {
       expect(response.status, JSON.stringify(b)).toBe(400);
       expect((await response.json()).error.field, JSON.stringify(b)).toBe(field);
     }
+  });
+});
+
+describe("absurd figures answer 400 naming the field, never 500", () => {
+  const orifice = { flow: { value: 10, unit: "g/s" }, dP: { value: 1, unit: "psi" }, cd: 0.61, densityKgM3: 750 };
+  const restriction = { targetAreaIn2: 0.01, maxHoles: 2, valveAreaIn2: 0.02, channelLengthIn: 0.5, minWebIn: 0.03 };
+  const plug = { passageDiameter: { value: 0.085, unit: "in" }, wall: { value: 0.25, unit: "in" }, depth: { value: 0.5, unit: "in" } };
+
+  /** A copy of a body with the number at a dotted path replaced by raw JSON text (1e999 parses to Infinity). */
+  function withRaw(body: object, path: string, raw: string): string {
+    const marker = "__figure__";
+    const copy = structuredClone(body) as Record<string, unknown>;
+    const keys = path.split(".");
+    let at = copy;
+    for (const key of keys.slice(0, -1)) at = at[key] as Record<string, unknown>;
+    at[keys.at(-1)!] = marker;
+    return JSON.stringify(copy).replace(`"${marker}"`, raw);
+  }
+
+  for (const [name, route, body, paths] of [
+    ["orifice", orificeRoute, orifice, ["flow.value", "dP.value", "cd", "densityKgM3"]],
+    ["restriction", restrictionRoute, restriction, ["targetAreaIn2", "valveAreaIn2", "channelLengthIn", "minWebIn"]],
+    ["passage-plug", passagePlugRoute, plug, ["passageDiameter.value", "wall.value", "depth.value"]],
+  ] as const) {
+    it(`POST /api/calc/${name}`, async () => {
+      for (const path of paths) {
+        for (const raw of ["1e308", "5e-324", "1e999", "-1e308"]) {
+          const response = await route(jsonRequest(`/api/calc/${name}`, "POST", withRaw(body, path, raw)));
+          expect(response.status, `${path} = ${raw}`).toBe(400);
+          expect((await response.json()).error.field, `${path} = ${raw}`).toBe(path);
+        }
+      }
+    });
+  }
+
+  it("refuses a fuel density outside 500-1500 kg/m³, with a hint for one typed in g/cm³", async () => {
+    // Gasoline is about 0.745 g/cm³ = 745 kg/m³ (1 g/cm³ = 1000 kg/m³, NIST SP 811)
+    const gcm3 = await orificeRoute(jsonRequest("/api/calc/orifice", "POST", { ...orifice, densityKgM3: 0.745 }));
+    expect(gcm3.status).toBe(400);
+    const { error } = await gcm3.json();
+    expect(error.field).toBe("densityKgM3");
+    expect(error.message).toMatch(/500 and 1500 kg\/m³.*g\/cm³.*745 kg\/m³/);
+    for (const densityKgM3 of [499, 1501, 20000]) {
+      const response = await orificeRoute(jsonRequest("/api/calc/orifice", "POST", { ...orifice, densityKgM3 }));
+      expect(response.status, String(densityKgM3)).toBe(400);
+    }
+    const custom = await orificeRoute(
+      jsonRequest("/api/calc/orifice", "POST", { ...orifice, densityKgM3: undefined, fuel: { kind: "custom", densityKgM3: 0.79, stoichAfr: 6.4 } }),
+    );
+    expect(custom.status).toBe(400);
+    expect((await custom.json()).error.field).toMatch(/^fuel/);
+    const ok = await orificeRoute(jsonRequest("/api/calc/orifice", "POST", { ...orifice, densityKgM3: 745 }));
+    expect(ok.status).toBe(200);
   });
 });

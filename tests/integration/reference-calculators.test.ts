@@ -264,3 +264,52 @@ describe("stagingAction", () => {
     expect(Object.keys(cooler.error ?? {})).toContain("chargeTemperature.value");
   });
 });
+
+describe("every calculator refuses absurd figures, naming the field", () => {
+  /** Dotted names of the form's number boxes: `value` halves of quantities and the plain numbers. */
+  function numberBoxes(form: Fields, prefix = ""): string[] {
+    return Object.entries(form).flatMap(([key, value]) => {
+      const name = prefix ? `${prefix}.${key}` : key;
+      if (value !== null && typeof value === "object") return numberBoxes(value as Fields, name);
+      if (typeof value === "string" && (key === "value" || /^-?\d*\.?\d*$/.test(value))) return [name];
+      return [];
+    });
+  }
+  const forms = [
+    ["tapDrillAction", tapDrillAction, TAP_DRILL_FORM],
+    ["passagePlugAction", passagePlugAction, PASSAGE_PLUG_FORM],
+    ["restrictionAction", restrictionAction, { ...RESTRICTION_FORM, afrBefore: "13", afrAfter: "12", percent: "10" }],
+    ["grindPlanAction", grindPlanAction, GRIND_FORM],
+    ["pickupTubeAction", pickupTubeAction, PICKUP_TUBE_FORM],
+    ["stagingAction", stagingAction, STAGING_FORM],
+  ] as const;
+
+  for (const [name, action, form] of forms) {
+    it(`${name}: 1e308, 5e-324, Infinity and NaN in every number box`, async () => {
+      const boxes = numberBoxes(form as Fields);
+      expect(boxes.length).toBeGreaterThan(0);
+      for (const box of boxes) {
+        for (const figure of ["1e308", "5e-324", "Infinity", "NaN", "-1e308"]) {
+          const result = await run(action as Action<unknown>, withFields(form as Fields, { [box]: figure }));
+          expect(result.httpStatus, `${box} = ${figure}`).toBe(400);
+          // Conform names list items with brackets: valves.0.opening.value is valves[0].opening.value
+          expect(Object.keys(result.error ?? {}), `${box} = ${figure}`).toContain(box.replace(/\.(\d+)/g, "[$1]"));
+        }
+      }
+    });
+  }
+
+  it("says to check the unit for a length no carburetor job needs", async () => {
+    // 50 in of passage diameter is beyond the 40 in any calculator takes (our own limit)
+    const result = await refused(passagePlugAction, withFields(PASSAGE_PLUG_FORM, { "passage.value": "50" }), "passage.value");
+    expect(result.error?.["passage.value"]?.join(" ")).toMatch(/check the unit/);
+    // 0.0002 mm is under the 0.001 mm a shop measures
+    await refused(grindPlanAction, withFields(GRIND_FORM, { "perPass.value": "0.0002", "perPass.unit": "mm" }), "perPass.value");
+  });
+
+  it("refuses a depth per pass that would take more than 100 passes, on that field", async () => {
+    // 0.060 + 0.020 - 0.010 = 0.070 in to remove; at 0.0005 in a pass that is 140 passes (limit 100, our own)
+    const result = await refused(grindPlanAction, withFields(GRIND_FORM, { "perPass.value": "0.0005" }), "perPass.value");
+    expect(result.error?.["perPass.value"]?.join(" ")).toMatch(/140 passes/);
+  });
+});
