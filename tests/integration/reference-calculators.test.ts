@@ -196,7 +196,21 @@ describe("pickupTubeAction", () => {
     expect(tube.fitsBowl).toBe(true);
   });
 
+  it("says the tube does not fit when it reaches past the room the bowl leaves", async () => {
+    // Reach 1.65625 in rearward and 1.40625 in down (worked above): 1.6 in of room rearward is exceeded,
+    // 1.5 in downward is not.
+    const tube = await ok(
+      pickupTubeAction,
+      withFields(PICKUP_TUBE_FORM, { "maxRearward.value": "1.6", "maxDownward.value": "1.5" }),
+    );
+    expect(tube.fitsBowl).toBe(false);
+    expect(tube.exceeds).toEqual(["rearward"]);
+    const roomy = await ok(pickupTubeAction, withFields(PICKUP_TUBE_FORM, { "maxRearward.value": "1.7", "maxDownward.value": "1.5" }));
+    expect(roomy.fitsBowl).toBe(true);
+  });
+
   it("names the field that is wrong", async () => {
+    await refused(pickupTubeAction, withFields(PICKUP_TUBE_FORM, { "maxDownward.value": "-1" }), "maxDownward.value");
     await refused(pickupTubeAction, withFields(PICKUP_TUBE_FORM, { bendAngle: "200" }), "bendAngle");
     await refused(pickupTubeAction, withFields(PICKUP_TUBE_FORM, { "thirdRun.value": "0.5" }), "secondBendAngle");
     // A bend tighter than the tube's own radius is refused by the computation, on the radius.
