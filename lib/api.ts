@@ -45,3 +45,21 @@ export function refusalResponse(error: unknown) {
   console.error(error);
   return apiError(500, "internal", "Something went wrong on the server.");
 }
+
+/**
+ * A public calculator endpoint: the JSON body is parsed with the calculator form's own schema (400 naming the
+ * field), then its computation runs; a refusal it raises answers with its status and code, anything else 500.
+ */
+export function calculatorRoute<Schema extends z.ZodType, Result>(schema: Schema, compute: (input: z.output<Schema>) => Result) {
+  return async function POST(request: Request): Promise<NextResponse> {
+    const json = await readJson(request);
+    if (!json.ok) return json.response;
+    const parsed = schema.safeParse(json.value);
+    if (!parsed.success) return invalidInput(parsed.error);
+    try {
+      return NextResponse.json(compute(parsed.data));
+    } catch (error) {
+      return refusalResponse(error);
+    }
+  };
+}

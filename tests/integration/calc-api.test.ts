@@ -6,6 +6,9 @@ import { GET as tapDrillRoute } from "@/app/api/calc/tap-drill/route";
 import { POST as orificeRoute } from "@/app/api/calc/orifice/route";
 import { POST as restrictionRoute } from "@/app/api/calc/restriction/route";
 import { POST as passagePlugRoute } from "@/app/api/calc/passage-plug/route";
+import { POST as grindRoute } from "@/app/api/calc/grind/route";
+import { POST as pickupTubeRoute } from "@/app/api/calc/pickup-tube/route";
+import { POST as stagingRoute } from "@/app/api/calc/staging/route";
 import { jsonRequest } from "./support/database";
 
 const get = (path: string) => new Request(`http://127.0.0.1${path}`);
@@ -176,6 +179,10 @@ describe("every calculator endpoint answers 400, never 500, to malformed input",
       valveAreaIn2: fc.anything(),
       channelLengthIn: fc.anything(),
       minWebIn: fc.anything(),
+      passageDiameter: fc.record({ value: fc.oneof(fc.double(), fc.string()), unit: fc.constantFrom("in", "mm", "ft") }),
+      threads: fc.oneof(fc.array(fc.string()), fc.anything()),
+      perPass: fc.record({ value: fc.double(), unit: fc.constantFrom("in", "mm") }),
+      valves: fc.array(fc.anything()),
     }, { requiredKeys: [] }),
     fc.string(),
   );
@@ -183,6 +190,10 @@ describe("every calculator endpoint answers 400, never 500, to malformed input",
   for (const [name, route] of [
     ["orifice", orificeRoute],
     ["restriction", restrictionRoute],
+    ["passage-plug", passagePlugRoute],
+    ["grind", grindRoute],
+    ["pickup-tube", pickupTubeRoute],
+    ["staging", stagingRoute],
   ] as const) {
     it(`POST /api/calc/${name}`, async () => {
       await fc.assert(
@@ -321,5 +332,152 @@ describe("absurd figures answer 400 naming the field, never 500", () => {
     expect((await custom.json()).error.field).toMatch(/^fuel/);
     const ok = await orificeRoute(jsonRequest("/api/calc/orifice", "POST", { ...orifice, densityKgM3: 745 }));
     expect(ok.status).toBe(200);
+  });
+});
+
+const inches = (value: number) => ({ value, unit: "in" });
+
+/** POSTs a body and answers the status and the parsed JSON. */
+async function call(route: (request: Request) => Promise<Response>, path: string, body: unknown) {
+  const response = await route(jsonRequest(path, "POST", body));
+  return { status: response.status, json: await response.json() };
+}
+
+/** 400 naming the field, as every calculator endpoint does. */
+async function expectRefused(route: (request: Request) => Promise<Response>, path: string, body: unknown, field: string) {
+  const { status, json } = await call(route, path, body);
+  expect(status, field).toBe(400);
+  expect(json.error.code, field).toBe("invalid_input");
+  expect(json.error.field, field).toBe(field);
+  expect(json.error.message, field).toMatch(new RegExp(`^${field.replace(/[.[\]]/g, "\\$&")}: `));
+}
+
+describe("POST /api/calc/grind", () => {
+  const grind = {
+    protrusion: inches(0.06),
+    clearance: inches(0.02),
+    clayGap: inches(0.01),
+    wall: inches(0.25),
+    minWall: inches(0.12),
+    perPass: inches(0.015),
+    clayEvery: 2,
+  };
+
+  it("plans the depth in equal passes with clay checks, as the form does", async () => {
+    const { status, json } = await call(grindRoute, "/api/calc/grind", grind);
+    expect(status).toBe(200);
+    // 0.060 + 0.020 - 0.010 = 0.070 in; 0.070 / 0.015 = 4.67 -> 5 passes of 0.014 in; clay after 2, 4 and the last, 5
+    expect(json.ok).toBe(true);
+    expect(json.depth.in).toBeCloseTo(0.07, 9);
+    expect(json.passes).toHaveLength(5);
+    expect(json.passes[0].depth.in).toBeCloseTo(0.014, 9);
+    expect(json.passes.filter((p: { clayCheck: boolean }) => p.clayCheck).map((p: { pass: number }) => p.pass)).toEqual([2, 4, 5]);
+    // 0.250 - 0.070 = 0.180 in of wall left
+    expect(json.remainingWall.in).toBeCloseTo(0.18, 9);
+  });
+
+  it("names the field that is wrong", async () => {
+    await expectRefused(grindRoute, "/api/calc/grind", { ...grind, perPass: inches(0) }, "perPass.value");
+    await expectRefused(grindRoute, "/api/calc/grind", { ...grind, clayGap: undefined }, "clayGap");
+    await expectRefused(grindRoute, "/api/calc/grind", { ...grind, clayEvery: 1.5 }, "clayEvery");
+    await expectRefused(grindRoute, "/api/calc/grind", { ...grind, wall: { value: 1, unit: "furlong" } }, "wall.unit");
+    // 0.070 in at 0.0005 in a pass is 140 passes, over the 100 a plan takes (our own limit)
+    await expectRefused(grindRoute, "/api/calc/grind", { ...grind, perPass: inches(0.0005) }, "perPass.value");
+  });
+});
+
+describe("POST /api/calc/pickup-tube", () => {
+  const tube = {
+    firstRun: inches(1),
+    bendAngle: 90,
+    radius: inches(0.5),
+    secondRun: inches(0.75),
+    swage: inches(0.25),
+    outsideDiameter: inches(0.3125),
+  };
+
+  it("adds the runs, the bend's arc and the swage, and fits without a limit", async () => {
+    const { status, json } = await call(pickupTubeRoute, "/api/calc/pickup-tube", tube);
+    expect(status).toBe(200);
+    // 1.0 + 0.75 + 0.5 x pi/2 + 0.25 = 2.785398 in
+    expect(json.cutLength.in).toBeCloseTo(2.785398, 5);
+    // rearward 1.0 + 0.5 + 0.3125 / 2 = 1.65625 in; down 0.5 + 0.75 + 0.15625 = 1.40625 in
+    expect(json.reachRearward.in).toBeCloseTo(1.65625, 5);
+    expect(json.reachDownward.in).toBeCloseTo(1.40625, 5);
+    expect(json.fitsBowl).toBe(true);
+  });
+
+  it("says the tube does not fit the room the bowl leaves", async () => {
+    // 1.40625 in down against 1.25 in of room; 1.65625 in rearward within 2 in
+    const { json } = await call(pickupTubeRoute, "/api/calc/pickup-tube", { ...tube, maxRearward: inches(2), maxDownward: inches(1.25) });
+    expect(json.fitsBowl).toBe(false);
+    expect(json.exceeds).toEqual(["downward"]);
+  });
+
+  it("names the field that is wrong", async () => {
+    await expectRefused(pickupTubeRoute, "/api/calc/pickup-tube", { ...tube, bendAngle: 200 }, "bendAngle");
+    await expectRefused(pickupTubeRoute, "/api/calc/pickup-tube", { ...tube, maxDownward: inches(-1) }, "maxDownward.value");
+    await expectRefused(pickupTubeRoute, "/api/calc/pickup-tube", { ...tube, thirdRun: inches(0.5) }, "secondBendAngle");
+    // a bend tighter than the tube's own radius: refused by the computation, on the radius
+    await expectRefused(pickupTubeRoute, "/api/calc/pickup-tube", { ...tube, radius: inches(0.1) }, "radius.value");
+  });
+});
+
+describe("POST /api/calc/staging", () => {
+  const staging = {
+    primaryJet: inches(0.076),
+    primaryJets: 2,
+    secondaryJet: inches(0.089),
+    secondaryJets: 2,
+    valves: [
+      { kind: "vacuum", side: "primary", opening: { value: 6.5, unit: "inHg" }, area: { value: 0.002, unit: "in²" } },
+      { kind: "boost", side: "primary", opening: { value: 3, unit: "psi" }, area: { value: 0.0015, unit: "in²" } },
+      { kind: "boost", side: "secondary", opening: { value: 8, unit: "psi" }, area: { value: 0.003, unit: "in²" } },
+    ],
+    fuel: "gasoline",
+    targetScale: "afr",
+    targetAtmosphere: 12.5,
+    targetPeak: 11.5,
+    peakBoost: { value: 12, unit: "psi" },
+    ambientTemperature: { value: 77, unit: "°F" },
+    chargeTemperature: { value: 130, unit: "°F" },
+    band: 5,
+    proposeValves: 2,
+  };
+
+  it("charts the plan and balances the sides, as the form does", async () => {
+    const { status, json } = await call(stagingRoute, "/api/calc/staging", staging);
+    expect(status).toBe(200);
+    // Primary mains 2 x pi/4 x 0.076^2 = 0.0090729 in2; after the last stage the primary holds
+    // 0.0020 + 0.0015 = 0.0035 of 0.0065 in2 of restrictions = 53.846 %, and adds 0.0035 / 0.0090729 = 38.58 %
+    const last = json.balance.stages.at(-1);
+    expect(last.primarySharePct).toBeCloseTo(53.846, 2);
+    expect(last.primaryEnrichmentPct).toBeCloseTo(38.58, 1);
+    // the chart starts at 20 inHg of vacuum: 20 x 3386.389 / 6894.757 = 9.8231 psi under the atmosphere
+    expect(json.chart.fromPsi).toBeCloseTo(-9.8231, 3);
+  });
+
+  it("proposes boost-valve setpoints within the boost range", async () => {
+    const { status, json } = await call(stagingRoute, "/api/calc/staging", { ...staging, command: "propose" });
+    expect(status).toBe(200);
+    expect(json.proposal.valves).toHaveLength(2);
+    for (const valve of json.proposal.valves) {
+      expect(valve.setpointPsi).toBeGreaterThan(0);
+      expect(valve.setpointPsi).toBeLessThanOrEqual(12);
+    }
+  });
+
+  it("names the field that is wrong", async () => {
+    await expectRefused(stagingRoute, "/api/calc/staging", { ...staging, fuel: "diesel" }, "fuel");
+    await expectRefused(stagingRoute, "/api/calc/staging", { ...staging, targetScale: "lambda" }, "targetAtmosphere");
+    await expectRefused(
+      stagingRoute,
+      "/api/calc/staging",
+      { ...staging, valves: [{ ...staging.valves[1], opening: { value: 3, unit: "inHg" } }] },
+      "valves.0.opening.unit",
+    );
+    await expectRefused(stagingRoute, "/api/calc/staging", { ...staging, peakBoost: { value: 1e308, unit: "psi" } }, "peakBoost.value");
+    // the charge cannot be cooler than the ambient air: refused by the computation, on the charge temperature
+    await expectRefused(stagingRoute, "/api/calc/staging", { ...staging, chargeTemperature: { value: 50, unit: "°F" } }, "chargeTemperature.value");
   });
 });

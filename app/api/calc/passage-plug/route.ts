@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { invalidInput, readJson, refusalResponse } from "@/lib/api";
+import { calculatorRoute } from "@/lib/api";
 import { ALL_THREADS } from "@/lib/engineering/threads";
 import { toSI } from "@/lib/engineering/units";
 import { formQuantity } from "@/lib/form-schema";
@@ -24,35 +24,26 @@ const length = (q: { value: number; unit: (typeof FORM_LENGTH_UNITS)[number] }) 
 const inches = (pair: { in: number }) => pair.in;
 
 /** The set-screw plug for a vacuum passage, or 422 no_plug naming the drill or thread the shop lacks. Public. */
-export async function POST(request: Request) {
-  const json = await readJson(request);
-  if (!json.ok) return json.response;
-  const parsed = bodySchema.safeParse(json.value);
-  if (!parsed.success) return invalidInput(parsed.error);
-  const body = parsed.data;
-  try {
-    const plug = planPassagePlug({
-      passageDiameterM: length(body.passageDiameter),
-      wallThicknessM: length(body.wall),
-      depthAvailableM: length(body.depth),
-      engagementPct: body.engagement,
-      minWallM: body.minWall === undefined ? undefined : length(body.minWall),
-      threads: body.threads ?? ALL_THREADS,
-      drills: body.drills,
-    });
-    return Response.json({
-      plug: {
-        thread: { label: plug.thread.label },
-        drill: { label: plug.drill.label, inch: plug.drill.inch, mm: plug.drill.mm },
-        engagementPct: plug.engagementPct,
-        tapDepthIn: inches(plug.tapDepth),
-        drillDepthIn: inches(plug.drillDepth),
-        setScrew: plug.setScrew === null ? null : { label: plug.setScrew.label },
-        wallLeftIn: inches(plug.remainingWall),
-        warnings: plug.warnings,
-      },
-    });
-  } catch (error) {
-    return refusalResponse(error);
-  }
-}
+export const POST = calculatorRoute(bodySchema, (body) => {
+  const plug = planPassagePlug({
+    passageDiameterM: length(body.passageDiameter),
+    wallThicknessM: length(body.wall),
+    depthAvailableM: length(body.depth),
+    engagementPct: body.engagement,
+    minWallM: body.minWall === undefined ? undefined : length(body.minWall),
+    threads: body.threads ?? ALL_THREADS,
+    drills: body.drills,
+  });
+  return {
+    plug: {
+      thread: { label: plug.thread.label },
+      drill: { label: plug.drill.label, inch: plug.drill.inch, mm: plug.drill.mm },
+      engagementPct: plug.engagementPct,
+      tapDepthIn: inches(plug.tapDepth),
+      drillDepthIn: inches(plug.drillDepth),
+      setScrew: plug.setScrew === null ? null : { label: plug.setScrew.label },
+      wallLeftIn: inches(plug.remainingWall),
+      warnings: plug.warnings,
+    },
+  };
+});
