@@ -447,9 +447,12 @@ function noPlug(
   if (withStock !== undefined) return refuse(`${lead}; ${sentence(withStock)}.`, { thread: withStock.thread.label });
   const withBoth = firstPlug(others, standardPool, passageM, targetPct);
   if (withBoth !== undefined) {
-    const missing: MissingTooling = { thread: withBoth.thread.label };
-    if (stock !== undefined) missing.drill = withBoth.drill.label;
-    return refuse(`${lead}; ${sentence(withBoth)}.`, missing);
+    if (stock === undefined) return refuse(`${lead}; ${sentence(withBoth)}.`, { thread: withBoth.thread.label });
+    // No stocked drill suits any other thread either: both are missing.
+    return refuse(`${lead}; ${sentence(withBoth)}, and the ${withBoth.drill.label} is not stocked either.`, {
+      thread: withBoth.thread.label,
+      drill: withBoth.drill.label,
+    });
   }
   return refuse(`${lead}, and no thread in the tables (up to 1/2 in and M12) does: the passage is too large for a set-screw plug.`, {});
 }

@@ -375,6 +375,35 @@ describe("passagePlug", () => {
     expect(refusal.message).toMatch(/#8-32 UNC with a #29/);
   });
 
+  it("names both the thread and the drill when the shop lacks both", () => {
+    // 0.140 in passage, 6-32 offered, only #36 (0.1065 in) stocked. 10-24 with a #25 would do (worked above).
+    const refusal = refusalOf(
+      passagePlug({
+        passageDiameterM: 0.14 * IN,
+        wallThicknessM: 0.25 * IN,
+        depthAvailableM: 0.5 * IN,
+        threads: [thread("6-32")],
+        drills: drillsFromLabels(["#36"]),
+      }),
+    );
+    expect(refusal.missing).toEqual({ thread: "#10-24 UNC", drill: "#25" });
+    expect(refusal.message).toMatch(/#10-24 UNC with a #25.*not stocked either/);
+  });
+
+  it("names a thread the shop's own drills suit when only the thread is missing", () => {
+    // 0.140 in passage, 6-32 offered, #25 (0.1495 in) stocked: 10-24 takes it (74.8 %, worked above)
+    const refusal = refusalOf(
+      passagePlug({
+        passageDiameterM: 0.14 * IN,
+        wallThicknessM: 0.25 * IN,
+        depthAvailableM: 0.5 * IN,
+        threads: [thread("6-32")],
+        drills: drillsFromLabels(["#25", "#36"]),
+      }),
+    );
+    expect(refusal.missing).toEqual({ thread: "#10-24 UNC" });
+  });
+
   it("refuses when no stocked drill cleans the passage up, naming the drill", () => {
     // A rack of small drills: #50 (0.0700), #52 (0.0635), #55 (0.0520), ASME B94.11M; none reaches 0.085 in.
     const refusal = refusalOf(
