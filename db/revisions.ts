@@ -57,7 +57,7 @@ export async function approveRevision(actor: Viewer, jobId: string, options: { a
         409,
         `The plan has ${dangers.length} danger warning${dangers.length > 1 ? "s" : ""}: ${dangers.map((d) => d.message).join(" ")} Approve with an explicit acknowledgement, or change the plan.`,
         "acknowledgeWarnings",
-        dangers,
+        { warnings: dangers },
       );
     }
     const number = job.currentRevision + 1;

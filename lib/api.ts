@@ -1,9 +1,9 @@
 import "server-only";
 import { NextResponse } from "next/server";
 import type { z } from "zod";
-import { RequestRefusal } from "@/lib/errors";
+import { RequestRefusal, type UnprocessableCode } from "@/lib/errors";
 
-export type ApiErrorCode = "invalid_input" | "unauthenticated" | "forbidden" | "not_found" | "conflict" | "internal";
+export type ApiErrorCode = "invalid_input" | "unauthenticated" | "forbidden" | "not_found" | "conflict" | "internal" | UnprocessableCode;
 
 export interface ApiError {
   error: {
@@ -43,12 +43,32 @@ export async function readJson(request: Request): Promise<ParsedJson> {
 export function refusalResponse(error: unknown) {
   if (error instanceof RequestRefusal) {
     const code: ApiErrorCode =
-      error.status === 404 ? "not_found" : error.status === 409 ? "conflict" : error.status === 403 ? "forbidden" : "invalid_input";
+      error.detail.code !== undefined
+        ? error.detail.code
+        : error.status === 404 ? "not_found" : error.status === 409 ? "conflict" : error.status === 403 ? "forbidden" : "invalid_input";
     return apiError(error.status, code, error.field ? `${error.field}: ${error.message}` : error.message, {
       field: error.field,
-      ...(error.warnings ? { warnings: error.warnings } : {}),
+      ...(error.detail.warnings ? { warnings: error.detail.warnings } : {}),
     });
   }
   console.error(error);
   return apiError(500, "internal", "Something went wrong on the server.");
+}
+
+/**
+ * A public calculator endpoint: the JSON body is parsed with the calculator form's own schema (400 naming the
+ * field), then its computation runs; a refusal it raises answers with its status and code, anything else 500.
+ */
+export function calculatorRoute<Schema extends z.ZodType, Result>(schema: Schema, compute: (input: z.output<Schema>) => Result) {
+  return async function POST(request: Request): Promise<NextResponse> {
+    const json = await readJson(request);
+    if (!json.ok) return json.response;
+    const parsed = schema.safeParse(json.value);
+    if (!parsed.success) return invalidInput(parsed.error);
+    try {
+      return NextResponse.json(compute(parsed.data));
+    } catch (error) {
+      return refusalResponse(error);
+    }
+  };
 }

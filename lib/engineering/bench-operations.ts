@@ -3,15 +3,16 @@
 // with the planned value and the band it is accepted in.
 
 import type { BlockInput, BlockPlan, PlannedOperation } from "./conversion-plan";
+import { holeAcceptBand } from "./hole-accept-band";
 import { PA_PER_INHG } from "./units";
 
 const M_PER_IN = 0.0254;
 const PA_PER_PSI = 6894.757;
 
-// Bench tolerances (common practice, no published source): a twist drill in a small hole cuts within about
-// a thousandth of an inch of size; a boost valve is set within half a psi; a grind may stop a few
-// thousandths short of plan when the clay shows clearance.
-export const HOLE_DIAMETER_TOLERANCE_M = 0.001 * M_PER_IN;
+// Bench tolerances (common practice, no published source): a drilled hole is accepted in a band narrower than
+// half the gap to the neighbouring drill sizes (hole-accept-band.ts), so the bench never passes the wrong
+// drill; a boost valve is set within half a psi; a grind may stop a few thousandths short of plan when the
+// clay shows clearance.
 export const OPENING_PRESSURE_TOLERANCE_PA = 0.5 * PA_PER_PSI;
 export const GRIND_DEPTH_SHORTFALL_M = 0.005 * M_PER_IN;
 /** Default least wall left behind the ground boss (common practice, no published source). */
@@ -82,6 +83,7 @@ export function blockOperations(block: BlockInput, plan: Omit<BlockPlan, "operat
   for (const stage of plan.stages) {
     const input = block.stages.find((s) => s.id === stage.stageId)!;
     const c = stage.chosen;
+    const band = holeAcceptBand(c.drill);
     const valve = input.valve.kind === "vacuum" ? `vacuum valve (${inHg(input.valve.ratingPa)})` : `boost valve (${psi(input.valve.setpointPa)})`;
     ops.push({
       kind: "restriction",
@@ -93,8 +95,8 @@ export function blockOperations(block: BlockInput, plan: Omit<BlockPlan, "operat
         label: `Hole ${i + 1} by pin gauge`,
         quantity: "length" as const,
         plannedSi: c.drill.diameterM,
-        minSi: c.drill.diameterM - HOLE_DIAMETER_TOLERANCE_M,
-        maxSi: c.drill.diameterM + HOLE_DIAMETER_TOLERANCE_M,
+        minSi: band.minM,
+        maxSi: band.maxM,
       })),
       caution: "drilling",
       stageId: stage.stageId,

@@ -21,7 +21,7 @@ import type { RestrictionDrillLimits } from "./restriction-limits";
 import { planPickupTube, COMMON_PICKUP_TUBE_OD_M, type PickupTubePlan } from "./pickup-tube";
 import { jetAreaOf, mainJetsBySide, sizeStages, stageMode, type StageInput, type StagePlan } from "./stage-sizing";
 import { stagingBalance, type CarburetorSide, type StagingBalance, type StagingModel, type StagingSweep } from "./staging";
-import { passagePlug, UNIFIED_THREADS, type PassagePlug } from "./threads";
+import { passagePlug, UNIFIED_THREADS, type MissingTooling, type PassagePlug, type PassagePlugResult } from "./threads";
 import type { Drill, FuelProperties } from "./types";
 import { PA_PER_INHG } from "./units";
 
@@ -102,6 +102,8 @@ export interface BlockPlan {
   /** The block's stages in the order they were given. */
   stages: SolvedStage[];
   plug?: PassagePlug | undefined;
+  /** Why the vacuum passage has no plug: nothing the shop has can plug it (what is missing is named). */
+  plugRefusal?: { message: string; missing: MissingTooling } | undefined;
   grind?: GrindPlan | undefined;
   tube?: PickupTubePlan | undefined;
   operations: PlannedOperation[];
@@ -132,7 +134,7 @@ export function stageLabel(block: Pick<BlockInput, "side" | "stages">, stageId: 
   return `${block.side === "primary" ? "Primary" : "Secondary"} stage ${index + 1} (${valve})`;
 }
 
-function plugOf(block: BlockInput, inchDrills: readonly Drill[]): PassagePlug | undefined {
+function plugOf(block: BlockInput, inchDrills: readonly Drill[]): PassagePlugResult | undefined {
   if (!block.passage) return undefined;
   return passagePlug({
     passageDiameterM: block.passage.diameterM,
@@ -170,11 +172,22 @@ function tubeOf(block: BlockInput): PickupTubePlan | undefined {
   });
 }
 
-function blockWarnings(block: BlockInput, stages: readonly StagePlan[], plug: PassagePlug | undefined, grind: GrindPlan | undefined, tube: PickupTubePlan | undefined): PlanWarning[] {
+function blockWarnings(
+  block: BlockInput,
+  stages: readonly StagePlan[],
+  plug: PassagePlugResult | undefined,
+  grind: GrindPlan | undefined,
+  tube: PickupTubePlan | undefined,
+): PlanWarning[] {
   const side = block.side === "primary" ? "Primary" : "Secondary";
   const about = { blockId: block.id };
   const warnings: PlanWarning[] = stages.flatMap((s) => s.warnings.map((w) => ({ ...w, message: `${stageLabel(block, s.stageId)}: ${w.message}` })));
-  if (plug) for (const message of plug.warnings) warnings.push({ code: "plug_note", level: "caution", message: `${side} passage plug: ${message}`, ...about });
+  if (plug && !plug.ok) {
+    // Without the plug a boost valve sees the same pressure on both sides and never opens.
+    const boost = block.stages.some((s) => s.valve.kind === "boost");
+    warnings.push({ code: "no_plug", level: boost ? "warning" : "caution", message: `${side} vacuum passage cannot be plugged with what the shop has: ${plug.message}`, ...about });
+  }
+  if (plug?.ok) for (const message of plug.plug.warnings) warnings.push({ code: "plug_note", level: "caution", message: `${side} passage plug: ${message}`, ...about });
   if (grind && !grind.ok && grind.reason) warnings.push({ code: "grind_refused", level: "warning", message: `${side} grind: ${grind.reason.message}`, ...about });
   if (tube && !tube.fitsBowl) {
     warnings.push({ code: "tube_does_not_fit", level: "warning", message: `${side} pickup tube reaches further than the bowl allows: shorten the runs or open the bend.`, ...about });
@@ -223,7 +236,8 @@ export function planConversion(input: {
       side: block.side,
       mainJetAreaM2: jetAreaOf(block.mainJetDiameterM, block.mainJetCount),
       stages,
-      plug,
+      plug: plug?.ok ? plug.plug : undefined,
+      plugRefusal: plug && !plug.ok ? { message: plug.message, missing: plug.missing } : undefined,
       grind,
       tube,
       warnings: blockWarnings(block, stages, plug, grind, tube),

@@ -90,14 +90,14 @@ const BY_LABEL: ReadonlyMap<string, Drill> = new Map(ALL_DRILLS.map((d) => [d.la
 
 /**
  * Finds a standard drill by the way a shop writes it. Accepts, case and spacing aside:
- * number "#43", "43", "no. 43", "No43"; letter "q"; fraction "1/8", "8/64", '1/8"', "1/8 in";
+ * number "#43", "no. 43", "No43"; letter "q"; fraction "1/8", "8/64", '1/8"', "1/8 in";
  * metric "2.5mm", "2.50 mm"; decimal inch only with its unit, "0.089 in" or '0.089"' (matched to 0.0001 in).
- * A bare decimal such as "0.5" is refused: it could be millimetres or inches.
+ * A bare number such as "2" or "2.5" is refused: it could be the number drill, millimetres or inches.
  */
 export function findDrill(label: string): Drill | undefined {
   const s = label.trim().toLowerCase().replace(/\s+/g, " ");
 
-  const num = /^(?:#|no\.?|nr\.?|number)? ?(\d{1,2})$/.exec(s);
+  const num = /^(?:#|no\.?|nr\.?|number) ?(\d{1,2})$/.exec(s);
   if (num?.[1] !== undefined) return BY_LABEL.get(`#${Number(num[1])}`);
 
   if (/^[a-z]$/.test(s)) return BY_LABEL.get(s.toUpperCase());
@@ -130,11 +130,23 @@ export function findDrill(label: string): Drill | undefined {
   return undefined;
 }
 
-/** The drills named by the labels, in the order given; an unknown label throws an error naming it. */
-export function drillsFromLabels(labels: readonly string[]): Drill[] {
-  return labels.map((label) => {
+/** How a drill must be written, for messages that refuse one. */
+export const DRILL_LABEL_FORMS = '"#43" (number drill), "A" (letter), "1/16" (fraction), "2.5 mm" (metric) or "0.089 in" (decimal inch)';
+
+/** Why a label names no standard drill, or undefined when it does. */
+export function drillLabelProblem(label: string): string | undefined {
+  if (findDrill(label) !== undefined) return undefined;
+  if (/^\s*(\d+(\.\d*)?|\.\d+)\s*$/.test(label)) {
+    return `"${label.trim()}" does not say which drill series it is: write ${DRILL_LABEL_FORMS}`;
+  }
+  return `"${label.trim()}" is not a standard drill size: write ${DRILL_LABEL_FORMS}`;
+}
+
+/** The drills named by the labels, in the order given; a label that names none throws an error naming it. */
+export function drillsFromLabels(labels: readonly string[], field = "drills"): Drill[] {
+  return labels.map((label, i) => {
     const drill = findDrill(label);
-    if (drill === undefined) throw new RangeError(`drill: "${label}" is not a standard drill size`);
+    if (drill === undefined) throw new RangeError(`${field}.${i}: ${drillLabelProblem(label)}`);
     return drill;
   });
 }

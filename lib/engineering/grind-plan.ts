@@ -56,6 +56,12 @@ export interface GrindPlan {
   passes: GrindPass[];
 }
 
+/**
+ * A clearance grind is a handful of light passes; a plan of more than this many is a slip in the depth per pass
+ * (our own limit, no published source).
+ */
+export const MAX_GRIND_PASSES = 100;
+
 // A depth that is a whole number of passes up to rounding (0.050 / 0.0125 in floating point) is not one
 // pass more.
 const PASS_ROUNDING = 1e-9;
@@ -91,6 +97,9 @@ export function planGrind(input: GrindPlanInput): GrindPlan {
     };
   }
   const count = Math.max(1, Math.ceil(rawDepth / perPass - PASS_ROUNDING));
+  if (count > MAX_GRIND_PASSES) {
+    throw new RangeError(`maxDepthPerPassM: the depth would take ${count} passes, more than ${MAX_GRIND_PASSES}; check the depth per pass`);
+  }
   const depthM = rawDepth / count;
   const passes: GrindPass[] = [];
   for (let pass = 1; pass <= count; pass++) {

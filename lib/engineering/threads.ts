@@ -89,6 +89,8 @@ export const ALL_THREADS: readonly Thread[] = [...UNIFIED_THREADS, ...METRIC_THR
 
 const SAME_M = 1e-9;
 
+const fmtIn = (m: number): string => `${(m / M_PER_IN).toFixed(4)} in`;
+
 /**
  * Reads a thread as a shop writes it: "4-40", "#4-40", "no. 4-40", "4-40 UNC", "1/4-20", '1/4"-20 UNC-2B',
  * "M3x0.5", "m3 x 0.5", "M3×0.5", "M3" (coarse), "M8x1". Undefined for anything not in the tables, including a
@@ -126,11 +128,24 @@ export function parseThread(label: string): Thread | undefined {
 
 /** 1.299038 P is 1.5 x the fundamental triangle height (0.866025 P): the depth the engagement formula counts. */
 const ENGAGEMENT_DEPTH_PER_PITCH = 1.299038;
+/** Basic thread depth of the internal thread, 1.082532 P (5/8 H): D1 = D - 1.082532 P (ASME B1.1, ISO 724). */
+const BASIC_DEPTH_PER_PITCH = 1.082532;
 
 /** Percent thread engagement a drill gives: (D - d) / (1.299038 P) x 100. */
 export function threadEngagementPct(majorM: number, pitchM: number, drillM: number): number {
   return ((majorM - drillM) / (ENGAGEMENT_DEPTH_PER_PITCH * pitchM)) * 100;
 }
+
+/** Basic minor diameter of the internal thread, m: D - 1.082532 P (ASME B1.1; ISO 724 writes it D1). */
+export function basicMinorDiameterM(thread: Thread): number {
+  return thread.majorM - BASIC_DEPTH_PER_PITCH * thread.pitchM;
+}
+
+/**
+ * The most engagement a tap drill can give: a drill at the basic minor diameter, 1.082532 / 1.299038 = 83.3 %.
+ * A smaller drill leaves metal the tap must tear out below the thread's root; taps break there.
+ */
+export const MAX_TAP_ENGAGEMENT_PCT = (BASIC_DEPTH_PER_PITCH / ENGAGEMENT_DEPTH_PER_PITCH) * 100;
 
 /** The drill diameter that gives exactly the engagement asked for. */
 export function idealTapDrillM(thread: Thread, engagementPct: number): number {
@@ -154,9 +169,13 @@ export interface TapDrillResult {
   engagementPct: number;
 }
 
+const fmtPctLimit = (pct: number): string => `${pct.toFixed(1)} %`;
+
 function requireEngagement(pct: number): void {
-  if (!Number.isFinite(pct) || pct <= 0 || pct > 100) {
-    throw new RangeError(`engagementPct: must be above 0 and at most 100, got ${pct}`);
+  if (!Number.isFinite(pct) || pct <= 0 || pct > MAX_TAP_ENGAGEMENT_PCT + 1e-9) {
+    throw new RangeError(
+      `engagementPct: must be above 0 and at most ${fmtPctLimit(MAX_TAP_ENGAGEMENT_PCT)} (a drill at the thread's basic minor diameter), got ${pct}`,
+    );
   }
 }
 
@@ -166,19 +185,27 @@ function drillPool(thread: Thread, drills: readonly Drill[] | undefined, allowOt
   return thread.system === "unified" ? INCH_DRILLS : METRIC_DRILLS;
 }
 
+/** True when a thread can be tapped in a hole of this drill: not under the basic minor diameter, under the major. */
+function formsThread(thread: Thread, drillM: number): boolean {
+  return drillM >= basicMinorDiameterM(thread) - SAME_M && drillM < thread.majorM;
+}
+
 /**
  * The tap drill for a thread: the drill nearest the diameter that gives the target engagement (which is also the
- * drill whose engagement is nearest the target, engagement being linear in the drill diameter). Unified threads
- * take inch drills and metric threads metric drills, unless a drill list or allowOtherSystem says otherwise.
+ * drill whose engagement is nearest the target, engagement being linear in the drill diameter), among drills
+ * from the basic minor diameter up to the major diameter. Unified threads take inch drills and metric threads
+ * metric drills, unless a drill list or allowOtherSystem says otherwise.
  */
 export function tapDrill(thread: Thread, options: TapDrillOptions = {}): TapDrillResult {
   const { engagementPct = 75, drills, allowOtherSystem = false } = options;
   requireEngagement(engagementPct);
   const idealM = idealTapDrillM(thread, engagementPct);
-  const pool = drillPool(thread, drills, allowOtherSystem).filter((d) => d.diameterM < thread.majorM);
+  const pool = drillPool(thread, drills, allowOtherSystem).filter((d) => formsThread(thread, d.diameterM));
   const drill = pool.length === 0 ? undefined : nearestDrill(idealM, { drills: pool });
   if (drill === undefined) {
-    throw new RangeError(`drills: none is smaller than the major diameter of ${thread.label}`);
+    throw new RangeError(
+      `drills: none lies between the basic minor diameter (${fmtIn(basicMinorDiameterM(thread))}) and the major diameter of ${thread.label}`,
+    );
   }
   return { idealM, drill, engagementPct: threadEngagementPct(thread.majorM, thread.pitchM, drill.diameterM) };
 }
@@ -301,13 +328,12 @@ export interface PassagePlugInput {
 
 export interface PassagePlug {
   thread: Thread;
+  /** A drill at least the passage diameter (it removes the old passage wall) giving 60-80 % engagement. */
   drill: Drill;
   /** The tap to use: "#4-40 UNC plug tap". */
   tapLabel: string;
   /** Engagement the drill gives, percent. */
   engagementPct: number;
-  /** True when the drill is at least the passage diameter, so it removes the old passage wall entirely. */
-  cleansUp: boolean;
   /** Metal left between the thread crests and the outside or the neighbouring passage, m (negative: breaks through). */
   remainingWallM: number;
   /** Full-thread depth, m. */
@@ -320,14 +346,25 @@ export interface PassagePlug {
   warnings: string[];
 }
 
+/** What the shop would need to plug the passage: a drill size, a thread, or both (labels as written). */
+export interface MissingTooling {
+  drill?: string;
+  thread?: string;
+}
+
+/** A plug, or the reason there is none and what the shop lacks. */
+export type PassagePlugResult =
+  | { ok: true; plug: PassagePlug }
+  | { ok: false; code: "no_plug"; message: string; missing: MissingTooling };
+
 function requireLength(value: number, field: string, allowZero: boolean): void {
   if (!Number.isFinite(value) || value < 0 || (!allowZero && value === 0)) {
     throw new RangeError(`${field}: must be ${allowZero ? "zero or more" : "above zero"}, got ${value}`);
   }
 }
 
-const fmtIn = (m: number): string => `${(m / M_PER_IN).toFixed(4)} in`;
 const fmtPct = (pct: number): string => `${pct.toFixed(0)} %`;
+const BAND_TEXT = `${PLUG_ENGAGEMENT_BAND.minPct}-${PLUG_ENGAGEMENT_BAND.maxPct} %`;
 
 interface Candidate {
   thread: Thread;
@@ -335,13 +372,21 @@ interface Candidate {
   engagementPct: number;
 }
 
-/** Among the drills that clean the passage up and still cut thread, the one nearest the target engagement. */
-function cleaningDrill(thread: Thread, pool: readonly Drill[], passageM: number, targetPct: number, inBandOnly: boolean): Candidate | undefined {
+/** Drill diameters that clean the passage up and give an engagement inside the band: [low, high], m, or undefined. */
+function plugDrillWindow(thread: Thread, passageM: number): { lowM: number; highM: number } | undefined {
+  const lowM = Math.max(passageM, idealTapDrillM(thread, PLUG_ENGAGEMENT_BAND.maxPct));
+  const highM = idealTapDrillM(thread, PLUG_ENGAGEMENT_BAND.minPct);
+  return lowM <= highM + SAME_M ? { lowM, highM } : undefined;
+}
+
+/** Among the drills inside the thread's window, the one nearest the target engagement. */
+function plugDrill(thread: Thread, pool: readonly Drill[], passageM: number, targetPct: number): Candidate | undefined {
+  const window = plugDrillWindow(thread, passageM);
+  if (window === undefined) return undefined;
   let best: Candidate | undefined;
   for (const drill of pool) {
-    if (drill.diameterM < passageM - SAME_M || drill.diameterM >= thread.majorM) continue;
+    if (drill.diameterM < window.lowM - SAME_M || drill.diameterM > window.highM + SAME_M) continue;
     const engagementPct = threadEngagementPct(thread.majorM, thread.pitchM, drill.diameterM);
-    if (inBandOnly && (engagementPct < PLUG_ENGAGEMENT_BAND.minPct || engagementPct > PLUG_ENGAGEMENT_BAND.maxPct)) continue;
     if (best === undefined || Math.abs(engagementPct - targetPct) < Math.abs(best.engagementPct - targetPct)) {
       best = { thread, drill, engagementPct };
     }
@@ -349,64 +394,98 @@ function cleaningDrill(thread: Thread, pool: readonly Drill[], passageM: number,
   return best;
 }
 
+/** Coarse threads first, smallest first within each series (a coarse thread holds better in cast aluminium and zinc). */
+function plugOrder(threads: readonly Thread[]): Thread[] {
+  const sorted = [...threads].sort(bySize);
+  return [...sorted.filter(isCoarse), ...sorted.filter((t) => !isCoarse(t))];
+}
+
+function firstPlug(threads: readonly Thread[], poolFor: (t: Thread) => readonly Drill[], passageM: number, targetPct: number): Candidate | undefined {
+  for (const t of plugOrder(threads)) {
+    const found = plugDrill(t, poolFor(t), passageM, targetPct);
+    if (found) return found;
+  }
+  return undefined;
+}
+
+const standardPool = (t: Thread): readonly Drill[] => drillPool(t, undefined, false);
+
+/** Says which drill or thread the shop lacks, with a pairing from the standard tables that would plug the passage. */
+function noPlug(
+  passageM: number,
+  threads: readonly Thread[],
+  stock: readonly Drill[] | undefined,
+  targetPct: number,
+): Extract<PassagePlugResult, { ok: false }> {
+  const passage = `a ${fmtIn(passageM)} passage`;
+  const poolFor = (t: Thread) => drillPool(t, stock, false);
+  const refuse = (message: string, missing: MissingTooling) => ({ ok: false as const, code: "no_plug" as const, message, missing });
+  const sentence = (c: Candidate) => `${c.thread.label} with a ${c.drill.label} (${fmtIn(c.drill.diameterM)}, ${fmtPct(c.engagementPct)}) would`;
+
+  // The offered threads could do it with a drill the shop does not have.
+  const withStandardDrill = firstPlug(threads, standardPool, passageM, targetPct);
+  if (withStandardDrill !== undefined) {
+    const window = plugDrillWindow(withStandardDrill.thread, passageM)!;
+    const stocked = [...new Set(threads.flatMap((t) => poolFor(t)))];
+    const largest = stocked.reduce<Drill | undefined>((a, d) => (a === undefined || d.diameterM > a.diameterM ? d : a), undefined);
+    const lead =
+      largest !== undefined && largest.diameterM < passageM - SAME_M
+        ? `No stocked drill cleans up ${passage} (the largest is ${largest.label}, ${fmtIn(largest.diameterM)})`
+        : `No stocked drill cleans up ${passage} and leaves ${BAND_TEXT} engagement for any offered thread ` +
+          `(${withStandardDrill.thread.label} needs one between ${(window.lowM / M_PER_IN).toFixed(4)} and ${fmtIn(window.highM)})`;
+    return refuse(`${lead}; ${sentence(withStandardDrill)}.`, { drill: withStandardDrill.drill.label });
+  }
+
+  // No offered thread can: the window of every one is empty. Look for a thread of the same systems.
+  const systems = new Set(threads.map((t) => t.system));
+  const others = ALL_THREADS.filter((t) => systems.has(t.system) && !threads.includes(t));
+  const largestOffered = [...threads].sort(bySize).at(-1)!;
+  const lead =
+    `No offered thread leaves ${BAND_TEXT} engagement with a drill that cleans up ${passage} ` +
+    `(${largestOffered.label} needs a drill of ${fmtIn(idealTapDrillM(largestOffered, PLUG_ENGAGEMENT_BAND.minPct))} or less)`;
+  const withStock = stock === undefined ? undefined : firstPlug(others, poolFor, passageM, targetPct);
+  if (withStock !== undefined) return refuse(`${lead}; ${sentence(withStock)}.`, { thread: withStock.thread.label });
+  const withBoth = firstPlug(others, standardPool, passageM, targetPct);
+  if (withBoth !== undefined) {
+    if (stock === undefined) return refuse(`${lead}; ${sentence(withBoth)}.`, { thread: withBoth.thread.label });
+    // No stocked drill suits any other thread either: both are missing.
+    return refuse(`${lead}; ${sentence(withBoth)}, and the ${withBoth.drill.label} is not stocked either.`, {
+      thread: withBoth.thread.label,
+      drill: withBoth.drill.label,
+    });
+  }
+  return refuse(`${lead}, and no thread in the tables (up to 1/2 in and M12) does: the passage is too large for a set-screw plug.`, {});
+}
+
 /**
- * The thread that plugs a passage. Its drill must clean the passage up (be at least the passage diameter) and
- * give an engagement inside the 60-80 % band, as near the target as the drills allow. Threads are tried smallest
- * first, coarse series before fine ones at every size (a coarse thread holds better in cast aluminium and zinc:
- * common practice), so a fine thread is chosen only when no coarse one will do. When no drill gives an engagement
- * inside the band, the smallest thread with a cleaning drill is taken with a warning; when none cleans up at all,
- * the largest thread with its tap drill.
+ * The thread that plugs a passage, or a refusal. The drill must clean the passage up (be at least the passage
+ * diameter, so no old wall is left) and give an engagement inside the 60-80 % band, which also keeps it above
+ * the thread's basic minor diameter and under its major diameter, so a full thread forms. Threads are tried
+ * smallest first, coarse series before fine ones at every size (a coarse thread holds better in cast aluminium
+ * and zinc: common practice), so a fine thread is chosen only when no coarse one will do; among its drills the
+ * one nearest the target engagement. When no pairing of an offered thread and a stocked drill qualifies, the
+ * answer names what the shop lacks and a pairing from the standard tables that would do.
  *
  * Then: tap depth = 1.5 x thread diameter (less if the depth runs out), drill depth = tap depth + 3 pitches,
  * set screw = the longest stocked length not over the tap depth less one pitch, remaining wall = wall thickness
  * less the growth of the hole's radius to the thread crests, (major - passage) / 2.
  */
-export function passagePlug(input: PassagePlugInput): PassagePlug {
+export function passagePlug(input: PassagePlugInput): PassagePlugResult {
   const { passageDiameterM, wallThicknessM, depthAvailableM, engagementPct = 75, minWallM = DEFAULT_MIN_WALL_M } = input;
   requireLength(passageDiameterM, "passageDiameterM", false);
   requireLength(wallThicknessM, "wallThicknessM", true);
   requireLength(depthAvailableM, "depthAvailableM", false);
   requireLength(minWallM, "minWallM", true);
   requireEngagement(engagementPct);
-  const threads = [...(input.threads ?? ALL_THREADS)].sort(bySize);
+  const threads = input.threads ?? ALL_THREADS;
   if (threads.length === 0) throw new RangeError("threads: the list is empty");
-  const ordered = [...threads.filter(isCoarse), ...threads.filter((t) => !isCoarse(t))];
-  const poolFor = (t: Thread) => drillPool(t, input.drills, false);
+  if (input.drills !== undefined && input.drills.length === 0) throw new RangeError("drills: the list is empty");
 
-  const warnings: string[] = [];
-  let chosen: Candidate | undefined;
-  for (const t of ordered) {
-    chosen = cleaningDrill(t, poolFor(t), passageDiameterM, engagementPct, true);
-    if (chosen) break;
-  }
-  if (chosen === undefined) {
-    for (const t of ordered) {
-      chosen = cleaningDrill(t, poolFor(t), passageDiameterM, engagementPct, false);
-      if (chosen) break;
-    }
-    if (chosen !== undefined) {
-      warnings.push(
-        `No drill that cleans up the passage gives ${PLUG_ENGAGEMENT_BAND.minPct}-${PLUG_ENGAGEMENT_BAND.maxPct} % engagement; ` +
-          `${chosen.drill.label} in ${chosen.thread.label} gives ${fmtPct(chosen.engagementPct)}.`,
-      );
-    }
-  }
-  if (chosen === undefined) {
-    const largest = threads.at(-1)!;
-    const tap = tapDrill(largest, { engagementPct, drills: poolFor(largest) });
-    chosen = { thread: largest, drill: tap.drill, engagementPct: tap.engagementPct };
-    warnings.push(
-      `No thread's drill cleans up a ${fmtIn(passageDiameterM)} passage; ${chosen.drill.label} (${fmtIn(chosen.drill.diameterM)}) ` +
-        `is smaller than the passage and leaves part of its old wall.`,
-    );
-    if (chosen.engagementPct < PLUG_ENGAGEMENT_BAND.minPct || chosen.engagementPct > PLUG_ENGAGEMENT_BAND.maxPct) {
-      warnings.push(`Engagement ${fmtPct(chosen.engagementPct)} is outside ${PLUG_ENGAGEMENT_BAND.minPct}-${PLUG_ENGAGEMENT_BAND.maxPct} %.`);
-    }
-  }
+  const chosen = firstPlug(threads, (t) => drillPool(t, input.drills, false), passageDiameterM, engagementPct);
+  if (chosen === undefined) return noPlug(passageDiameterM, threads, input.drills, engagementPct);
 
   const { thread, drill } = chosen;
-  const cleansUp = drill.diameterM >= passageDiameterM - SAME_M;
-
+  const warnings: string[] = [];
   const remainingWallM = wallThicknessM - (thread.majorM - passageDiameterM) / 2;
   if (remainingWallM < minWallM) {
     warnings.push(
@@ -430,16 +509,18 @@ export function passagePlug(input: PassagePlugInput): PassagePlug {
   if (setScrew === null) warnings.push(`No stocked set screw of ${thread.label} is short enough for the thread depth.`);
 
   return {
-    thread,
-    drill,
-    tapLabel: `${thread.label} plug tap`,
-    engagementPct: chosen.engagementPct,
-    cleansUp,
-    remainingWallM,
-    tapDepthM,
-    drillDepthM,
-    setScrew,
-    setScrewLengthM: setScrew?.lengthM ?? null,
-    warnings,
+    ok: true,
+    plug: {
+      thread,
+      drill,
+      tapLabel: `${thread.label} plug tap`,
+      engagementPct: chosen.engagementPct,
+      remainingWallM,
+      tapDepthM,
+      drillDepthM,
+      setScrew,
+      setScrewLengthM: setScrew?.lengthM ?? null,
+      warnings,
+    },
   };
 }

@@ -37,6 +37,10 @@ import { grindPlanAction } from "@/app/(office)/reference/calculators/grind/acti
 import { pickupTubeAction } from "@/app/(office)/reference/calculators/pickup-tube/actions";
 import { stagingAction } from "@/app/(office)/reference/calculators/staging/actions";
 import * as referenceForms from "./support/reference-forms";
+import { POST as passagePlugRoute } from "@/app/api/calc/passage-plug/route";
+import { POST as grindRoute } from "@/app/api/calc/grind/route";
+import { POST as pickupTubeRoute } from "@/app/api/calc/pickup-tube/route";
+import { POST as stagingRoute } from "@/app/api/calc/staging/route";
 import { blocksBody } from "./support/jobs";
 
 async function machinistId(): Promise<string> {
@@ -55,6 +59,10 @@ interface AccessCase {
 const OFFICE_ONLY = (ok: number): Record<Actor, number> => ({ anonymous: 401, machinist: 403, tuner: ok, admin: ok });
 const EVERYONE = (ok: number): Record<Actor, number> => ({ anonymous: 401, machinist: ok, tuner: ok, admin: ok });
 const jobParams = (id: string) => ({ params: Promise.resolve({ id }) });
+
+/** The calculator API holds no shop data: anyone may call it, signed in or not. */
+const PUBLIC = (ok: number): Record<Actor, number> => ({ anonymous: ok, machinist: ok, tuner: ok, admin: ok });
+const inch = (value: number) => ({ value, unit: "in" });
 
 const ADMIN_ONLY = (ok: number): Record<Actor, number> => ({ anonymous: 401, machinist: 403, tuner: 403, admin: ok });
 
@@ -308,6 +316,73 @@ const CASES: AccessCase[] = [
       const outcome = await settle(saveBlocksAction(id, undefined, nestedFormData(blocksBody())));
       return outcome.redirectTo === `/jobs/${id}` ? 303 : outcome.result!.httpStatus;
     },
+  },
+  {
+    name: "POST /api/calc/passage-plug",
+    expected: PUBLIC(200),
+    call: async () =>
+      (await passagePlugRoute(jsonRequest("/api/calc/passage-plug", "POST", { passageDiameter: inch(0.085), wall: inch(0.25), depth: inch(0.5) })))
+        .status,
+  },
+  {
+    name: "POST /api/calc/grind",
+    expected: PUBLIC(200),
+    call: async () =>
+      (
+        await grindRoute(
+          jsonRequest("/api/calc/grind", "POST", {
+            protrusion: inch(0.06),
+            clearance: inch(0.02),
+            clayGap: inch(0.01),
+            wall: inch(0.25),
+            minWall: inch(0.12),
+            perPass: inch(0.015),
+            clayEvery: 2,
+          }),
+        )
+      ).status,
+  },
+  {
+    name: "POST /api/calc/pickup-tube",
+    expected: PUBLIC(200),
+    call: async () =>
+      (
+        await pickupTubeRoute(
+          jsonRequest("/api/calc/pickup-tube", "POST", {
+            firstRun: inch(1),
+            bendAngle: 90,
+            radius: inch(0.5),
+            secondRun: inch(0.75),
+            swage: inch(0.25),
+            outsideDiameter: inch(0.3125),
+          }),
+        )
+      ).status,
+  },
+  {
+    name: "POST /api/calc/staging",
+    expected: PUBLIC(200),
+    call: async () =>
+      (
+        await stagingRoute(
+          jsonRequest("/api/calc/staging", "POST", {
+            primaryJet: inch(0.076),
+            primaryJets: 2,
+            secondaryJet: inch(0.089),
+            secondaryJets: 2,
+            valves: [{ kind: "vacuum", side: "primary", opening: { value: 6.5, unit: "inHg" }, area: { value: 0.002, unit: "in²" } }],
+            fuel: "gasoline",
+            targetScale: "afr",
+            targetAtmosphere: 12.5,
+            targetPeak: 11.5,
+            peakBoost: { value: 12, unit: "psi" },
+            ambientTemperature: { value: 77, unit: "°F" },
+            chargeTemperature: { value: 130, unit: "°F" },
+            band: 5,
+            proposeValves: 2,
+          }),
+        )
+      ).status,
   },
   // Reference calculators: every role may use them; they read and write nothing but the user's unit choice.
   {

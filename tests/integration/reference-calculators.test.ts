@@ -84,6 +84,9 @@ describe("tapDrillAction", () => {
     await refused(tapDrillAction, { thread: "4-41", engagement: "75" }, "thread");
     await refused(tapDrillAction, { thread: "4-40", engagement: "0" }, "engagement");
     await refused(tapDrillAction, { thread: "4-40", engagement: "lots" }, "engagement");
+    // ASME B1.1: a drill at the basic minor diameter D - 1.082532 P gives 1.082532 / 1.299038 = 83.3 %
+    await refused(tapDrillAction, { thread: "4-40", engagement: "100" }, "engagement");
+    await refused(tapDrillAction, { thread: "4-40", engagement: "84" }, "engagement");
   });
 });
 
@@ -94,7 +97,6 @@ describe("passagePlugAction", () => {
     // (0.099 - 0.089) / (1.299038 / 48) = 37 %, under the 60 % band; #4-40 with #43 gives 70.8 %.
     expect(plug.thread.label).toBe("#4-40 UNC");
     expect(plug.drill.label).toBe("#43");
-    expect(plug.cleansUp).toBe(true);
     // Tap depth 1.5 x 0.112 = 0.168 in; drill depth 0.168 + 3 x 0.025 = 0.243 in.
     expect(plug.tapDepth.in).toBeCloseTo(0.168, 6);
     expect(plug.drillDepth.in).toBeCloseTo(0.243, 6);
@@ -105,7 +107,17 @@ describe("passagePlugAction", () => {
     expect(plug.warnings).toEqual([]);
   });
 
+  it("answers 422 when no thread in the tables plugs the passage", async () => {
+    // A 0.500 in passage: the largest Unified thread, 1/2-20, needs a drill of at most
+    // 0.500 - 0.6 x 1.299038 / 20 = 0.4610 in for 60 % engagement (ASME B1.1 sizes), so none cleans it up.
+    const result = await run(passagePlugAction, withFields(PASSAGE_PLUG_FORM, { "passage.value": "0.500", "passage.unit": "in" }));
+    expect(result.httpStatus).toBe(422);
+    expect(result.data).toBeUndefined();
+    expect(result.error?.[""]?.join(" ")).toMatch(/0\.5000 in passage.*too large/);
+  });
+
   it("names the field that is wrong", async () => {
+    await refused(passagePlugAction, withFields(PASSAGE_PLUG_FORM, { engagement: "90" }), "engagement");
     await refused(passagePlugAction, withFields(PASSAGE_PLUG_FORM, { "passage.value": "" }), "passage.value");
     await refused(passagePlugAction, withFields(PASSAGE_PLUG_FORM, { "passage.unit": "furlong" }), "passage.unit");
     await refused(passagePlugAction, withFields(PASSAGE_PLUG_FORM, { "wall.value": "-1" }), "wall.value");
@@ -184,7 +196,21 @@ describe("pickupTubeAction", () => {
     expect(tube.fitsBowl).toBe(true);
   });
 
+  it("says the tube does not fit when it reaches past the room the bowl leaves", async () => {
+    // Reach 1.65625 in rearward and 1.40625 in down (worked above): 1.6 in of room rearward is exceeded,
+    // 1.5 in downward is not.
+    const tube = await ok(
+      pickupTubeAction,
+      withFields(PICKUP_TUBE_FORM, { "maxRearward.value": "1.6", "maxDownward.value": "1.5" }),
+    );
+    expect(tube.fitsBowl).toBe(false);
+    expect(tube.exceeds).toEqual(["rearward"]);
+    const roomy = await ok(pickupTubeAction, withFields(PICKUP_TUBE_FORM, { "maxRearward.value": "1.7", "maxDownward.value": "1.5" }));
+    expect(roomy.fitsBowl).toBe(true);
+  });
+
   it("names the field that is wrong", async () => {
+    await refused(pickupTubeAction, withFields(PICKUP_TUBE_FORM, { "maxDownward.value": "-1" }), "maxDownward.value");
     await refused(pickupTubeAction, withFields(PICKUP_TUBE_FORM, { bendAngle: "200" }), "bendAngle");
     await refused(pickupTubeAction, withFields(PICKUP_TUBE_FORM, { "thirdRun.value": "0.5" }), "secondBendAngle");
     // A bend tighter than the tube's own radius is refused by the computation, on the radius.
@@ -250,5 +276,54 @@ describe("stagingAction", () => {
     const cooler = await run(stagingAction, withFields(STAGING_FORM, { "chargeTemperature.value": "40" }));
     expect(cooler.httpStatus).toBe(400);
     expect(Object.keys(cooler.error ?? {})).toContain("chargeTemperature.value");
+  });
+});
+
+describe("every calculator refuses absurd figures, naming the field", () => {
+  /** Dotted names of the form's number boxes: `value` halves of quantities and the plain numbers. */
+  function numberBoxes(form: Fields, prefix = ""): string[] {
+    return Object.entries(form).flatMap(([key, value]) => {
+      const name = prefix ? `${prefix}.${key}` : key;
+      if (value !== null && typeof value === "object") return numberBoxes(value as Fields, name);
+      if (typeof value === "string" && (key === "value" || /^-?\d*\.?\d*$/.test(value))) return [name];
+      return [];
+    });
+  }
+  const forms = [
+    ["tapDrillAction", tapDrillAction, TAP_DRILL_FORM],
+    ["passagePlugAction", passagePlugAction, PASSAGE_PLUG_FORM],
+    ["restrictionAction", restrictionAction, { ...RESTRICTION_FORM, afrBefore: "13", afrAfter: "12", percent: "10" }],
+    ["grindPlanAction", grindPlanAction, GRIND_FORM],
+    ["pickupTubeAction", pickupTubeAction, PICKUP_TUBE_FORM],
+    ["stagingAction", stagingAction, STAGING_FORM],
+  ] as const;
+
+  for (const [name, action, form] of forms) {
+    it(`${name}: 1e308, 5e-324, Infinity and NaN in every number box`, async () => {
+      const boxes = numberBoxes(form as Fields);
+      expect(boxes.length).toBeGreaterThan(0);
+      for (const box of boxes) {
+        for (const figure of ["1e308", "5e-324", "Infinity", "NaN", "-1e308"]) {
+          const result = await run(action as Action<unknown>, withFields(form as Fields, { [box]: figure }));
+          expect(result.httpStatus, `${box} = ${figure}`).toBe(400);
+          // Conform names list items with brackets: valves.0.opening.value is valves[0].opening.value
+          expect(Object.keys(result.error ?? {}), `${box} = ${figure}`).toContain(box.replace(/\.(\d+)/g, "[$1]"));
+        }
+      }
+    });
+  }
+
+  it("says to check the unit for a length no carburetor job needs", async () => {
+    // 50 in of passage diameter is beyond the 40 in any calculator takes (our own limit)
+    const result = await refused(passagePlugAction, withFields(PASSAGE_PLUG_FORM, { "passage.value": "50" }), "passage.value");
+    expect(result.error?.["passage.value"]?.join(" ")).toMatch(/check the unit/);
+    // 0.0002 mm is under the 0.001 mm a shop measures
+    await refused(grindPlanAction, withFields(GRIND_FORM, { "perPass.value": "0.0002", "perPass.unit": "mm" }), "perPass.value");
+  });
+
+  it("refuses a depth per pass that would take more than 100 passes, on that field", async () => {
+    // 0.060 + 0.020 - 0.010 = 0.070 in to remove; at 0.0005 in a pass that is 140 passes (limit 100, our own)
+    const result = await refused(grindPlanAction, withFields(GRIND_FORM, { "perPass.value": "0.0005" }), "perPass.value");
+    expect(result.error?.["perPass.value"]?.join(" ")).toMatch(/140 passes/);
   });
 });

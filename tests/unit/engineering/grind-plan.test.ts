@@ -55,6 +55,13 @@ describe("planGrind", () => {
     expect(plan).toMatchObject({ ok: true, grindNeeded: false, depthM: 0, passes: [] });
   });
 
+  it("refuses a depth per pass that would take more than 100 passes", () => {
+    // Hand: 0.050 in to remove; 0.050 / 0.0005 = 100 passes is the most taken (our own limit, no published source),
+    // 0.050 / 0.0004 = 125 passes is refused, naming the depth per pass.
+    expect(planGrind({ ...base, maxDepthPerPassM: inch(0.0005) }).passes).toHaveLength(100);
+    expect(() => planGrind({ ...base, maxDepthPerPassM: inch(0.0004) })).toThrow(/maxDepthPerPassM: .*125 passes/);
+  });
+
   it("refuses negative measurements", () => {
     expect(() => planGrind({ ...base, measuredGapM: -0.001 })).toThrow(RangeError);
     expect(() => planGrind({ ...base, maxDepthPerPassM: 0 })).toThrow(RangeError);

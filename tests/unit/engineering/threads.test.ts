@@ -10,6 +10,7 @@ import {
   clearanceDrill,
   passagePlug,
   setScrewFor,
+  type PassagePlugResult,
   type Thread,
 } from "@/lib/engineering/threads";
 import { INCH_DRILLS, METRIC_DRILLS, drillsFromLabels } from "@/lib/engineering/drills";
@@ -186,21 +187,41 @@ describe("tapDrill", () => {
     expect(() => tapDrill(thread("4-40"), { drills: drillsFromLabels(["1/4"]) })).toThrow(/drills/);
   });
 
-  it("refuses an engagement outside 0-100 %, naming the field", () => {
+  it("refuses an engagement above the basic minor diameter's 83.3 %, naming the field", () => {
     expect(() => tapDrill(thread("4-40"), { engagementPct: 0 })).toThrow(/engagementPct/);
-    expect(() => tapDrill(thread("4-40"), { engagementPct: 120 })).toThrow(/engagementPct/);
+    // ASME B1.1: basic minor diameter of 4-40 = 0.112 - 1.082532 x 0.025 = 0.112 - 0.0270633 = 0.0849367 in.
+    // Its engagement: 0.0270633 / (1.299038 x 0.025 = 0.0324760) = 0.8333, i.e. 83.3 %. At 100 % the ideal drill
+    // would be 0.112 - 0.0324760 = 0.0795 in, nearest #47 (0.0785, ASME B94.11M): a drill under the root.
+    expect(() => tapDrill(thread("4-40"), { engagementPct: 100 })).toThrow(/engagementPct.*83\.3 %/);
+    expect(() => tapDrill(thread("4-40"), { engagementPct: 84 })).toThrow(/engagementPct/);
+    // ISO 724: D1 = D - 1.082532 P as well, so the same 83.3 % bounds M3x0.5
+    expect(() => tapDrill(thread("M3"), { engagementPct: 90 })).toThrow(/engagementPct/);
+    expect(tapDrill(thread("4-40"), { engagementPct: 83.3 }).drill.label).toBe("#44");
+  });
+
+  it("never takes a drill under the basic minor diameter", () => {
+    // 4-40 at 83 %: ideal 0.112 - 0.83 x 0.0324760 = 0.08504 in. Of #45 (0.0820) and 3/32 (0.09375), #45 is nearer
+    // (0.0030 off against 0.0087) but under the basic minor 0.08494 in worked above, so 3/32 is the answer:
+    // (0.112 - 0.09375) / 0.0324760 = 56.2 %.
+    const r = tapDrill(thread("4-40"), { engagementPct: 83, drills: drillsFromLabels(["#45", "3/32"]) });
+    expect(r.drill.label).toBe("3/32");
+    expect(r.engagementPct).toBeCloseTo(56.2, 1);
+    expect(() => tapDrill(thread("4-40"), { drills: drillsFromLabels(["#45"]) })).toThrow(/drills: .*basic minor/);
   });
 
   it("gives the engagement of the formula and the nearest drill, for any thread and target", () => {
     fc.assert(
-      fc.property(fc.constantFrom(...ALL_THREADS), fc.double({ min: 50, max: 90, noNaN: true }), (t, pct) => {
+      fc.property(fc.constantFrom(...ALL_THREADS), fc.double({ min: 50, max: 83.3, noNaN: true }), (t, pct) => {
         const r = tapDrill(t, { engagementPct: pct });
         const d = r.drill.diameterM;
         // percent = (D - d) / (1.299038 P) x 100 (domain formula), written out here
         expect(r.engagementPct).toBeCloseTo(((t.majorM - d) / (1.299038 * t.pitchM)) * 100, 9);
         expect(r.idealM).toBeCloseTo(t.majorM - (pct / 100) * 1.299038 * t.pitchM, 12);
+        // ASME B1.1 / ISO 724 basic minor diameter D - 1.082532 P: the drill is never under it
+        const minor = t.majorM - 1.082532 * t.pitchM;
+        expect(d).toBeGreaterThanOrEqual(minor - 1e-9);
         const pool = t.system === "unified" ? INCH_DRILLS : METRIC_DRILLS;
-        for (const other of pool.filter((o) => o.diameterM < t.majorM)) {
+        for (const other of pool.filter((o) => o.diameterM < t.majorM && o.diameterM >= minor - 1e-9)) {
           expect(Math.abs(other.diameterM - r.idealM)).toBeGreaterThanOrEqual(Math.abs(d - r.idealM) - 1e-15);
         }
       }),
@@ -252,14 +273,23 @@ describe("setScrewFor", () => {
   });
 });
 
+function plugOf(result: PassagePlugResult) {
+  if (!result.ok) throw new Error(`expected a plug, got: ${result.message}`);
+  return result.plug;
+}
+
+function refusalOf(result: PassagePlugResult) {
+  if (result.ok) throw new Error(`expected a refusal, got ${result.plug.thread.label} with ${result.plug.drill.label}`);
+  return result;
+}
+
 describe("passagePlug", () => {
   it("plugs a 0.085 in passage with #4-40 and a #43 drill", () => {
     // domain.md and handbook tap-drill tables: #4-40 with a #43 (0.0890 in) drill; the passage is cleaned up
-    const plug = passagePlug({ passageDiameterM: 0.085 * IN, wallThicknessM: 0.25 * IN, depthAvailableM: 0.5 * IN });
+    const plug = plugOf(passagePlug({ passageDiameterM: 0.085 * IN, wallThicknessM: 0.25 * IN, depthAvailableM: 0.5 * IN }));
     expect(plug.thread.label).toBe("#4-40 UNC");
     expect(plug.drill.label).toBe("#43");
     expect(plug.tapLabel).toBe("#4-40 UNC plug tap");
-    expect(plug.cleansUp).toBe(true);
     expect(plug.engagementPct).toBeCloseTo(70.82, 1); // worked above
     // Tap depth 1.5 x 0.112 = 0.168 in; drill depth 0.168 + 3 x 0.025 = 0.243 in (common practice rules)
     expect(plug.tapDepthM / IN).toBeCloseTo(0.168, 9);
@@ -275,39 +305,34 @@ describe("passagePlug", () => {
   it("prefers the coarse thread when both series of a size qualify", () => {
     // Both 4-40 (#43, 70.8 %) and 4-48 (#42, 68.4 %) clean up 0.085 in; coarse holds better in castings
     // (common practice, no published source)
-    const both = passagePlug({
-      passageDiameterM: 0.085 * IN,
-      wallThicknessM: 0.25 * IN,
-      depthAvailableM: 0.5 * IN,
-      threads: [thread("4-48"), thread("4-40")],
-    });
+    const both = plugOf(
+      passagePlug({ passageDiameterM: 0.085 * IN, wallThicknessM: 0.25 * IN, depthAvailableM: 0.5 * IN, threads: [thread("4-48"), thread("4-40")] }),
+    );
     expect(both.thread.label).toBe("#4-40 UNC");
-    const fineOnly = passagePlug({
-      passageDiameterM: 0.085 * IN,
-      wallThicknessM: 0.25 * IN,
-      depthAvailableM: 0.5 * IN,
-      threads: [thread("4-48")],
-    });
+    const fineOnly = plugOf(
+      passagePlug({ passageDiameterM: 0.085 * IN, wallThicknessM: 0.25 * IN, depthAvailableM: 0.5 * IN, threads: [thread("4-48")] }),
+    );
     // Handbook tap drill for 4-48: #42
     expect(fineOnly.drill.label).toBe("#42");
   });
 
   it("moves up a size when the usual drill would not clean the passage up", () => {
-    // 0.0895 in is over #43 (0.0890); #42 would give 4-40 only 57 % thread. Handbook: 5-40 takes #38 (0.1015).
-    const plug = passagePlug({
-      passageDiameterM: 0.0895 * IN,
-      wallThicknessM: 0.25 * IN,
-      depthAvailableM: 0.5 * IN,
-      threads: UNIFIED_THREADS,
-    });
+    // 0.0895 in is over #43 (0.0890). 4-40 needs a drill from 0.0895 up to its 60 % drill,
+    // 0.112 - 0.6 x 1.299038 x 0.025 = 0.0925 in: #42 (0.0935, ASME B94.11M) is past it.
+    // 5-40 (0.125 in): 80 %..60 % drills 0.125 - 0.0260 = 0.0990 .. 0.125 - 0.0195 = 0.1055 in; 75 % ideal
+    // 0.125 - 0.0244 = 0.1006; #38 (0.1015) is 0.0009 off, #39 (0.0995) 0.0011: #38, the handbook's 5-40 drill.
+    const plug = plugOf(
+      passagePlug({ passageDiameterM: 0.0895 * IN, wallThicknessM: 0.25 * IN, depthAvailableM: 0.5 * IN, threads: UNIFIED_THREADS }),
+    );
     expect(plug.thread.label).toBe("#5-40 UNC");
     expect(plug.drill.label).toBe("#38");
-    expect(plug.drill.diameterM).toBeGreaterThanOrEqual(0.0895 * IN);
+    // (0.125 - 0.1015) / (1.299038 x 0.025) = 0.0235 / 0.032476 = 72.4 %
+    expect(plug.engagementPct).toBeCloseTo(72.4, 1);
   });
 
   it("warns when the wall is thin", () => {
     // 0.010 in of wall less (0.112 - 0.085) / 2 = 0.0135 in of growth breaks through
-    const plug = passagePlug({ passageDiameterM: 0.085 * IN, wallThicknessM: 0.01 * IN, depthAvailableM: 0.5 * IN });
+    const plug = plugOf(passagePlug({ passageDiameterM: 0.085 * IN, wallThicknessM: 0.01 * IN, depthAvailableM: 0.5 * IN }));
     expect(plug.remainingWallM / IN).toBeCloseTo(-0.0035, 9);
     expect(plug.warnings.join(" ")).toMatch(/breaks through/);
   });
@@ -315,7 +340,7 @@ describe("passagePlug", () => {
   it("warns when the depth is short, and when no set screw fits", () => {
     // 0.150 in available less 3 x 0.025 of lead = 0.075 in of thread, short of 1.5 x 0.112 = 0.168 in;
     // a set screw must be at most 0.075 - 0.025 = 0.050 in, under the shortest stocked 1/16 in
-    const plug = passagePlug({ passageDiameterM: 0.085 * IN, wallThicknessM: 0.25 * IN, depthAvailableM: 0.15 * IN });
+    const plug = plugOf(passagePlug({ passageDiameterM: 0.085 * IN, wallThicknessM: 0.25 * IN, depthAvailableM: 0.15 * IN }));
     expect(plug.tapDepthM / IN).toBeCloseTo(0.075, 9);
     expect(plug.drillDepthM / IN).toBeCloseTo(0.15, 9);
     expect(plug.setScrewLengthM).toBeNull();
@@ -323,41 +348,125 @@ describe("passagePlug", () => {
     expect(plug.warnings.some((w) => /set screw/.test(w))).toBe(true);
   });
 
-  it("warns when only an engagement outside 60-80 % cleans up", () => {
-    // 6-32 (0.138 in, 32 tpi) on a 0.120 in passage: drills from #31 (0.120) up give at most
-    // (0.138 - 0.120) / (1.299038 / 32) = 44 % thread
-    const plug = passagePlug({
-      passageDiameterM: 0.12 * IN,
-      wallThicknessM: 0.25 * IN,
-      depthAvailableM: 0.5 * IN,
-      threads: [thread("4-40"), thread("6-32")],
-    });
-    expect(plug.thread.label).toBe("#6-32 UNC");
-    expect(plug.drill.label).toBe("#31");
-    expect(plug.cleansUp).toBe(true);
-    expect(plug.engagementPct).toBeCloseTo(44.3, 1);
-    expect(plug.warnings.join(" ")).toMatch(/60-80 %/);
+  it("refuses a passage wider than the offered threads can plug, and names the thread that would", () => {
+    // 6-32 (0.138 in, 32 tpi) in a 0.140 in passage: the drill would be over the major diameter, no thread forms.
+    // 8-32 (0.164 in): its 60 % drill is 0.164 - 0.6 x 1.299038 / 32 = 0.1396 in, under 0.140: no.
+    // 10-24 (0.190 in): 80 %..60 % drills 0.190 - 0.0433 = 0.1467 .. 0.190 - 0.0325 = 0.1575 in; 75 % ideal
+    // 0.190 - 0.0406 = 0.1494; #25 (0.1495, ASME B94.11M) is nearest, the handbook's 10-24 drill:
+    // (0.190 - 0.1495) / 0.054127 = 74.8 %.
+    const refusal = refusalOf(
+      passagePlug({ passageDiameterM: 0.14 * IN, wallThicknessM: 0.25 * IN, depthAvailableM: 0.5 * IN, threads: [thread("4-40"), thread("6-32")] }),
+    );
+    expect(refusal.code).toBe("no_plug");
+    expect(refusal.missing).toEqual({ thread: "#10-24 UNC" });
+    expect(refusal.message).toMatch(/0\.1400 in passage/);
+    expect(refusal.message).toMatch(/#10-24 UNC with a #25/);
   });
 
-  it("warns when no thread cleans the passage up", () => {
-    const plug = passagePlug({
-      passageDiameterM: 0.14 * IN,
-      wallThicknessM: 0.25 * IN,
-      depthAvailableM: 0.5 * IN,
-      threads: [thread("4-40"), thread("6-32")],
-    });
-    expect(plug.thread.label).toBe("#6-32 UNC");
-    expect(plug.drill.label).toBe("#36"); // handbook tap drill for 6-32
-    expect(plug.cleansUp).toBe(false);
-    expect(plug.warnings.join(" ")).toMatch(/cleans up/);
+  it("refuses rather than plug outside 60-80 % engagement", () => {
+    // 6-32 on a 0.120 in passage: drills from #31 (0.120) up give at most (0.138 - 0.120) / (1.299038 / 32) = 44 %.
+    // 8-32: 80 %..60 % drills 0.164 - 0.0325 = 0.1315 .. 0.1396 in; only #29 (0.1360) lies there:
+    // (0.164 - 0.136) / 0.040595 = 69 %.
+    const refusal = refusalOf(
+      passagePlug({ passageDiameterM: 0.12 * IN, wallThicknessM: 0.25 * IN, depthAvailableM: 0.5 * IN, threads: [thread("4-40"), thread("6-32")] }),
+    );
+    expect(refusal.missing).toEqual({ thread: "#8-32 UNC" });
+    expect(refusal.message).toMatch(/60-80 %/);
+    expect(refusal.message).toMatch(/#8-32 UNC with a #29/);
   });
 
-  it("always cleans up when it can, and never with a drill over the major diameter", () => {
+  it("names both the thread and the drill when the shop lacks both", () => {
+    // 0.140 in passage, 6-32 offered, only #36 (0.1065 in) stocked. 10-24 with a #25 would do (worked above).
+    const refusal = refusalOf(
+      passagePlug({
+        passageDiameterM: 0.14 * IN,
+        wallThicknessM: 0.25 * IN,
+        depthAvailableM: 0.5 * IN,
+        threads: [thread("6-32")],
+        drills: drillsFromLabels(["#36"]),
+      }),
+    );
+    expect(refusal.missing).toEqual({ thread: "#10-24 UNC", drill: "#25" });
+    expect(refusal.message).toMatch(/#10-24 UNC with a #25.*not stocked either/);
+  });
+
+  it("names a thread the shop's own drills suit when only the thread is missing", () => {
+    // 0.140 in passage, 6-32 offered, #25 (0.1495 in) stocked: 10-24 takes it (74.8 %, worked above)
+    const refusal = refusalOf(
+      passagePlug({
+        passageDiameterM: 0.14 * IN,
+        wallThicknessM: 0.25 * IN,
+        depthAvailableM: 0.5 * IN,
+        threads: [thread("6-32")],
+        drills: drillsFromLabels(["#25", "#36"]),
+      }),
+    );
+    expect(refusal.missing).toEqual({ thread: "#10-24 UNC" });
+  });
+
+  it("refuses when no stocked drill cleans the passage up, naming the drill", () => {
+    // A rack of small drills: #50 (0.0700), #52 (0.0635), #55 (0.0520), ASME B94.11M; none reaches 0.085 in.
+    const refusal = refusalOf(
+      passagePlug({
+        passageDiameterM: 0.085 * IN,
+        wallThicknessM: 0.25 * IN,
+        depthAvailableM: 0.5 * IN,
+        threads: UNIFIED_THREADS,
+        drills: drillsFromLabels(["#50", "#52", "#55"]),
+      }),
+    );
+    expect(refusal.missing).toEqual({ drill: "#43" });
+    expect(refusal.message).toMatch(/largest is #50, 0\.0700 in/);
+    expect(refusal.message).toMatch(/#4-40 UNC with a #43/);
+  });
+
+  it("refuses when the stocked drills clean up but miss the band, with the band in the message", () => {
+    // 4-40 on 0.085 in: drills from 0.112 - 0.8 x 0.032476 = 0.0860 in to 0.112 - 0.6 x 0.032476 = 0.0925 in.
+    // #40 (0.0980) is past every small thread's band (5-40 starts at 0.0990); #50 does not clean up.
+    const refusal = refusalOf(
+      passagePlug({
+        passageDiameterM: 0.085 * IN,
+        wallThicknessM: 0.25 * IN,
+        depthAvailableM: 0.5 * IN,
+        threads: UNIFIED_THREADS,
+        drills: drillsFromLabels(["#40", "#50"]),
+      }),
+    );
+    expect(refusal.missing).toEqual({ drill: "#43" });
+    expect(refusal.message).toMatch(/between 0\.0860 and 0\.0925 in/);
+  });
+
+  it("names a metric drill for metric threads", () => {
+    // A 3.00 mm passage with only a 2.50 mm drill. M3.5x0.6: 80 %..60 % drills 3.5 - 0.6235 = 2.876 .. 3.5 - 0.4677
+    // = 3.032 mm; the 3.00 mm drill (BS 328 series) cleans up and gives (3.5 - 3.0) / (1.299038 x 0.6) = 64.2 %.
+    const refusal = refusalOf(
+      passagePlug({
+        passageDiameterM: 3 * MM,
+        wallThicknessM: 5 * MM,
+        depthAvailableM: 10 * MM,
+        threads: METRIC_THREADS,
+        drills: drillsFromLabels(["2.50 mm"]),
+      }),
+    );
+    expect(refusal.missing).toEqual({ drill: "3.00 mm" });
+    expect(refusal.message).toMatch(/M3\.5x0\.6 with a 3\.00 mm/);
+  });
+
+  it("when it plugs, cleans up and keeps the drill between the basic minor and major diameters", () => {
     fc.assert(
       fc.property(fc.double({ min: 0.02 * IN, max: 0.4 * IN, noNaN: true }), (passage) => {
-        const plug = passagePlug({ passageDiameterM: passage, wallThicknessM: 0.5 * IN, depthAvailableM: 1 * IN });
+        const result = passagePlug({ passageDiameterM: passage, wallThicknessM: 0.5 * IN, depthAvailableM: 1 * IN });
+        if (!result.ok) {
+          expect(result.message.length).toBeGreaterThan(0);
+          return;
+        }
+        const { plug } = result;
+        expect(plug.drill.diameterM).toBeGreaterThanOrEqual(passage - 1e-9);
         expect(plug.drill.diameterM).toBeLessThan(plug.thread.majorM);
-        if (plug.cleansUp) expect(plug.drill.diameterM).toBeGreaterThanOrEqual(passage - 1e-9);
+        // ASME B1.1 / ISO 724: basic minor diameter D - 1.082532 P
+        expect(plug.drill.diameterM).toBeGreaterThanOrEqual(plug.thread.majorM - 1.082532 * plug.thread.pitchM);
+        expect(plug.engagementPct).toBeGreaterThanOrEqual(60 - 1e-9);
+        expect(plug.engagementPct).toBeLessThanOrEqual(80 + 1e-9);
         expect(plug.drillDepthM).toBeGreaterThan(plug.tapDepthM);
         expect(plug.setScrewLengthM ?? 0).toBeLessThanOrEqual(plug.tapDepthM - plug.thread.pitchM + 1e-9);
       }),
@@ -369,5 +478,6 @@ describe("passagePlug", () => {
     expect(() => passagePlug({ passageDiameterM: 0.002, wallThicknessM: -1, depthAvailableM: 0.01 })).toThrow(/wallThicknessM/);
     expect(() => passagePlug({ passageDiameterM: 0.002, wallThicknessM: 0.01, depthAvailableM: Number.NaN })).toThrow(/depthAvailableM/);
     expect(() => passagePlug({ passageDiameterM: 0.002, wallThicknessM: 0.01, depthAvailableM: 0.01, threads: [] })).toThrow(/threads/);
+    expect(() => passagePlug({ passageDiameterM: 0.002, wallThicknessM: 0.01, depthAvailableM: 0.01, drills: [] })).toThrow(/drills/);
   });
 });

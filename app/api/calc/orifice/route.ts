@@ -4,7 +4,7 @@ import { areaIn2, areaMm2, tidy } from "@/lib/calc-dto";
 import { fuelProperties } from "@/lib/engineering/fuels";
 import { areaFromMassFlow, diameterForArea } from "@/lib/engineering/orifice";
 import { fromSI, toSI } from "@/lib/engineering/units";
-import { flowUnitSchema, fuelSchema, isMassFlowUnit, positiveNumber, positiveQuantity, pressureUnitSchema } from "@/lib/quantity-schema";
+import { flowUnitSchema, fuelDensity, fuelSchema, isMassFlowUnit, positiveNumber, positiveQuantity, pressureUnitSchema } from "@/lib/quantity-schema";
 
 const bodySchema = z
   .object({
@@ -12,7 +12,7 @@ const bodySchema = z
     dP: positiveQuantity("dP.value", pressureUnitSchema),
     cd: positiveNumber("cd").refine((v) => v <= 1, { error: "cd must not exceed 1" }),
     fuel: fuelSchema.optional(),
-    densityKgM3: positiveNumber("densityKgM3").optional(),
+    densityKgM3: fuelDensity("densityKgM3").optional(),
   })
   .refine((b) => b.fuel !== undefined || b.densityKgM3 !== undefined, { error: "give fuel or densityKgM3", path: ["fuel"] });
 

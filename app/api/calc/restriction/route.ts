@@ -1,11 +1,11 @@
 import { z } from "zod";
-import { apiError, invalidInput, readJson } from "@/lib/api";
+import { invalidInput, readJson } from "@/lib/api";
 import { areaIn2, drillDto, tidy } from "@/lib/calc-dto";
-import { ALL_DRILLS, drillsFromLabels } from "@/lib/engineering/drills";
+import { ALL_DRILLS } from "@/lib/engineering/drills";
 import { MAX_HOLES_PER_CHANNEL, solveHoleLayout } from "@/lib/engineering/hole-layout";
 import { DEFAULT_RESTRICTION_DRILL_LIMITS } from "@/lib/engineering/restriction-limits";
 import { toSI } from "@/lib/engineering/units";
-import { nonNegativeNumber, positiveNumber } from "@/lib/quantity-schema";
+import { drillList, nonNegativeNumber, positiveNumber } from "@/lib/quantity-schema";
 
 const bodySchema = z
   .object({
@@ -16,7 +16,7 @@ const bodySchema = z
       .int({ error: "maxHoles must be a whole number from 1 to 4" })
       .min(1, { error: "maxHoles must be a whole number from 1 to 4" })
       .max(MAX_HOLES_PER_CHANNEL, { error: "maxHoles must be a whole number from 1 to 4" }),
-    drills: z.array(z.string({ error: "drills must be a list of drill labels" }), { error: "drills must be a list of drill labels" }).min(1).optional(),
+    drills: drillList("drills").optional(),
     valveAreaIn2: positiveNumber("valveAreaIn2").optional(),
     channelLengthIn: positiveNumber("channelLengthIn").optional(),
     minWebIn: nonNegativeNumber("minWebIn").optional(),
@@ -34,12 +34,7 @@ export async function POST(request: Request) {
   const parsed = bodySchema.safeParse(json.value);
   if (!parsed.success) return invalidInput(parsed.error);
   const body = parsed.data;
-  let drills;
-  try {
-    drills = body.drills ? drillsFromLabels(body.drills) : ALL_DRILLS;
-  } catch (error) {
-    return apiError(400, "invalid_input", (error as Error).message, { field: "drills" });
-  }
+  const drills = body.drills ?? ALL_DRILLS;
   const inches = (v: number | undefined) => (v === undefined ? undefined : toSI("length", v, "in"));
   const candidates = solveHoleLayout({
     targetEffectiveAreaM2: body.targetAreaIn2 !== undefined ? toSI("area", body.targetAreaIn2, "in²") : toSI("area", body.targetAreaMm2!, "mm²"),

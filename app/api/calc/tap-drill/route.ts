@@ -2,6 +2,7 @@ import { z } from "zod";
 import { invalidInput } from "@/lib/api";
 import { drillDto, tidy } from "@/lib/calc-dto";
 import { parseThread, tapDrill } from "@/lib/engineering/threads";
+import { engagementSchema } from "@/app/(office)/reference/calculators/tap-drill/schema";
 import { fromSI } from "@/lib/engineering/units";
 
 const querySchema = z.object({
@@ -10,11 +11,7 @@ const querySchema = z.object({
     .trim()
     .min(1, { error: 'thread is required, e.g. "4-40" or "M3x0.5"' })
     .max(40),
-  engagement: z.coerce
-    .number({ error: "engagement must be a percentage" })
-    .gt(0, { error: "engagement must be above 0 %" })
-    .max(100, { error: "engagement must be at most 100 %" })
-    .default(75),
+  engagement: z.coerce.number({ error: "engagement must be a percentage" }).pipe(engagementSchema).optional(),
   allowOtherSystem: z.enum(["true", "false"], { error: "allowOtherSystem must be true or false" }).optional(),
 });
 
@@ -28,7 +25,7 @@ export async function GET(request: Request) {
       new z.ZodError([{ code: "custom", path: ["thread"], message: `"${query.data.thread}" is not a Unified #0-1/2 in or ISO M1.6-M12 thread`, input: query.data.thread }]),
     );
   }
-  const result = tapDrill(thread, { engagementPct: query.data.engagement, allowOtherSystem: query.data.allowOtherSystem === "true" });
+  const result = tapDrill(thread, { engagementPct: query.data.engagement ?? 75, allowOtherSystem: query.data.allowOtherSystem === "true" });
   return Response.json({
     thread: {
       label: thread.label,

@@ -115,7 +115,18 @@ export function BenchWork({ plan, unit }: { plan: BlockPlan; unit: DisplayLength
   return (
     <div className="flex flex-col gap-5">
       <div className="grid gap-6 md:grid-cols-3">
-        {plan.plug ? <PlugFacts plug={plan.plug} unit={unit} /> : <p className="text-sm text-pencil">No vacuum passage measured: no plug planned.</p>}
+        {plan.plug ? (
+          <PlugFacts plug={plan.plug} unit={unit} />
+        ) : plan.plugRefusal ? (
+          <section aria-label="Vacuum passage plug" className="flex flex-col gap-2">
+            <h4 className="text-xs font-semibold uppercase tracking-[0.12em] text-pencil">Plug the vacuum passage</h4>
+            <p className="text-sm font-semibold text-fault" role="alert" data-testid="plug-refusal">
+              No plug: {plan.plugRefusal.message}
+            </p>
+          </section>
+        ) : (
+          <p className="text-sm text-pencil">No vacuum passage measured: no plug planned.</p>
+        )}
         {plan.grind ? <GrindFacts grind={plan.grind} unit={unit} /> : <p className="text-sm text-pencil">No clay measurements: no grind planned.</p>}
         {plan.tube ? <TubeFacts tube={plan.tube} unit={unit} /> : plan.side === "secondary" ? <p className="text-sm text-pencil">No pickup tube measured.</p> : null}
       </div>

@@ -27,6 +27,7 @@ export function computeGrind(input: GrindInput): GrindResultDto {
       maxDepthPerPassM: length(input.perPass),
       clayCheckEvery: input.clayEvery,
     }),
+    { maxDepthPerPassM: "perPass.value" },
   );
   return {
     ok: plan.ok,

@@ -71,8 +71,8 @@ export function PickupTubeForm({ unit }: { unit: DisplayLengthUnit }) {
           </Readings>
           {result.fitsBowl ? null : (
             <p role="alert" className="rounded-[var(--radius-sheet)] border border-fault bg-fault-soft px-3 py-2 text-sm text-fault">
-              The tube reaches further {result.exceeds.join(" and ")} than the room given: the bowl may not come off. Shorten the run or
-              bend less.
+              Does not fit: the tube reaches further {result.exceeds.join(" and ")} than the room the bowl leaves, so the bowl may not
+              come off. Shorten the run or bend less.
             </p>
           )}
         </ResultPanel>

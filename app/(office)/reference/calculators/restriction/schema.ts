@@ -13,8 +13,8 @@ export const restrictionSchema = z
   .object({
     targetKind: z.enum(TARGET_KINDS, { error: "Choose how the target is given." }),
     targetArea: optionalFormQuantity("target area", FORM_AREA_UNITS),
-    afrBefore: formNumber("AFR before", { min: 0 }).optional(),
-    afrAfter: formNumber("AFR wanted", { min: 0 }).optional(),
+    afrBefore: formNumber("AFR before", { min: 0, max: 30 }).optional(),
+    afrAfter: formNumber("AFR wanted", { min: 0, max: 30 }).optional(),
     percent: formNumber("enrichment", { min: 0, max: 200 }).optional(),
     mainJet: optionalFormQuantity("main-jet bore", FORM_LENGTH_UNITS),
     mainJetCount: formWholeNumber("number of main jets", 1, 8).optional(),

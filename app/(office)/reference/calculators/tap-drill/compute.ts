@@ -1,7 +1,9 @@
 import "server-only";
 import { drillDto, lengthPair, tidy, type DrillDto, type LengthPair } from "@/lib/calc-dto";
 import { ALL_THREADS, clearanceDrill, METRIC_THREADS, parseThread, passagePlug, tapDrill, UNIFIED_THREADS, type Thread } from "@/lib/engineering/threads";
+import type { Drill } from "@/lib/engineering/types";
 import { toSI } from "@/lib/engineering/units";
+import { RequestRefusal } from "@/lib/errors";
 import { refuseOutOfRange } from "../refusal";
 import type { PassagePlugFormInput, TapDrillInput } from "./schema";
 
@@ -52,7 +54,6 @@ export interface PassagePlugResultDto {
   drill: DrillDto;
   tapLabel: string;
   engagementPct: number;
-  cleansUp: boolean;
   remainingWall: LengthPair;
   tapDepth: LengthPair;
   drillDepth: LengthPair;
@@ -60,28 +61,44 @@ export interface PassagePlugResultDto {
   warnings: string[];
 }
 
-export function computePassagePlug(input: PassagePlugFormInput): PassagePlugResultDto {
-  const length = (q: { value: number; unit: "in" | "mm" }) => toSI("length", q.value, q.unit);
-  const plug = refuseOutOfRange(() =>
-    passagePlug({
-      passageDiameterM: length(input.passage),
-      wallThicknessM: length(input.wall),
-      depthAvailableM: length(input.depth),
-      engagementPct: input.engagement,
-      minWallM: input.minWall === undefined ? undefined : length(input.minWall),
-      threads: { unified: UNIFIED_THREADS, metric: METRIC_THREADS, both: ALL_THREADS }[input.threadSystem],
-    }),
-  );
+/** A passage plug's inputs in SI, from the form or the JSON API. */
+export interface PassagePlugRequest {
+  passageDiameterM: number;
+  wallThicknessM: number;
+  depthAvailableM: number;
+  engagementPct?: number;
+  minWallM?: number;
+  threads: readonly Thread[];
+  /** The shop's drills; the standard series of each thread's system when absent. */
+  drills?: readonly Drill[];
+}
+
+/** The plug, or a 422 refusal (code no_plug) naming the drill or thread the shop lacks. */
+export function planPassagePlug(request: PassagePlugRequest): PassagePlugResultDto {
+  const result = refuseOutOfRange(() => passagePlug(request));
+  if (!result.ok) throw new RequestRefusal(422, result.message, undefined, { code: result.code });
+  const { plug } = result;
   return {
     thread: threadDto(plug.thread),
     drill: drillDto(plug.drill),
     tapLabel: plug.tapLabel,
     engagementPct: tidy(plug.engagementPct, 2),
-    cleansUp: plug.cleansUp,
     remainingWall: lengthPair(plug.remainingWallM),
     tapDepth: lengthPair(plug.tapDepthM),
     drillDepth: lengthPair(plug.drillDepthM),
     setScrew: plug.setScrew === null ? null : { label: plug.setScrew.label, length: lengthPair(plug.setScrew.lengthM) },
     warnings: plug.warnings,
   };
+}
+
+export function computePassagePlug(input: PassagePlugFormInput): PassagePlugResultDto {
+  const length = (q: { value: number; unit: "in" | "mm" }) => toSI("length", q.value, q.unit);
+  return planPassagePlug({
+    passageDiameterM: length(input.passage),
+    wallThicknessM: length(input.wall),
+    depthAvailableM: length(input.depth),
+    engagementPct: input.engagement,
+    minWallM: input.minWall === undefined ? undefined : length(input.minWall),
+    threads: { unified: UNIFIED_THREADS, metric: METRIC_THREADS, both: ALL_THREADS }[input.threadSystem],
+  });
 }

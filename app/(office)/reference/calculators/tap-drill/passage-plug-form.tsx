@@ -62,7 +62,7 @@ export function PassagePlugForm({ unit }: { unit: DisplayLengthUnit }) {
             <span className="text-graphite">
               drill <span className="numeric font-semibold text-ink">{result.drill.label}</span> ({drillSize(result.drill, unit)} {unit})
             </span>
-            {result.cleansUp ? <Tag tone="accent">cleans up the passage</Tag> : <Tag tone="fault">leaves old wall</Tag>}
+            <Tag tone="accent">cleans up the passage</Tag>
           </p>
           <Readings label="Plug details">
             <Reading label="Tap">{result.tapLabel}</Reading>

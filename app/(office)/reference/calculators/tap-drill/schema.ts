@@ -1,9 +1,12 @@
 import { z } from "zod";
-import { parseThread } from "@/lib/engineering/threads";
+import { MAX_TAP_ENGAGEMENT_PCT, parseThread } from "@/lib/engineering/threads";
 import { formNumber, formQuantity, optionalFormQuantity } from "@/lib/form-schema";
 import { FORM_LENGTH_UNITS } from "@/lib/form-units";
 
-const engagement = formNumber("thread engagement", { min: 0, max: 100 });
+/** Up to the basic minor diameter's 83.3 %: a smaller drill leaves metal under the thread's root (ASME B1.1). */
+export const engagementSchema = formNumber("thread engagement", { min: 0 }).max(MAX_TAP_ENGAGEMENT_PCT + 1e-9, {
+  error: `The thread engagement must be at most ${MAX_TAP_ENGAGEMENT_PCT.toFixed(1)} %: a drill under the thread's basic minor diameter leaves metal the tap cannot cut.`,
+});
 
 /** Tap drill for a thread at a chosen engagement. */
 export const tapDrillSchema = z.object({
@@ -14,7 +17,7 @@ export const tapDrillSchema = z.object({
     .refine((text) => parseThread(text) !== undefined, {
       error: "Not a thread in the chart: use a Unified size from #0 to 1/2 in (4-40, 1/4-20) or ISO M1.6 to M12 (M3x0.5).",
     }),
-  engagement,
+  engagement: engagementSchema,
 });
 
 export const PLUG_THREAD_SYSTEMS = ["unified", "metric", "both"] as const;
@@ -25,7 +28,7 @@ export const passagePlugSchema = z.object({
   passage: formQuantity("passage diameter", FORM_LENGTH_UNITS),
   wall: formQuantity("wall thickness", FORM_LENGTH_UNITS, { min: 0, minInclusive: true }),
   depth: formQuantity("depth available", FORM_LENGTH_UNITS),
-  engagement,
+  engagement: engagementSchema,
   minWall: optionalFormQuantity("least wall to keep", FORM_LENGTH_UNITS, { min: 0, minInclusive: true }),
 });
 

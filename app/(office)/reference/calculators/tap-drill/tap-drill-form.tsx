@@ -36,7 +36,7 @@ export function TapDrillForm({ unit }: { unit: DisplayLengthUnit }) {
             <option key={thread.label} value={thread.label} />
           ))}
         </datalist>
-        <NumberField label="Thread engagement" field={fields.engagement} suffix="%" hint="75 % is the usual figure; 60-80 % for a plug." />
+        <NumberField label="Thread engagement" field={fields.engagement} suffix="%" hint="75 % is the usual figure, 60-80 % for a plug; at most 83.3 % (the basic minor diameter)." />
         <Button type="submit" disabled={pending} className="self-start">
           {pending ? "Finding…" : "Find tap drill"}
         </Button>
