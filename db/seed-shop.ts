@@ -64,7 +64,7 @@ function jobFields(fields: Partial<JobFields> & Pick<JobFields, "carburetor" | "
   };
 }
 
-const DEMO_JOBS: { customer: number; fields: JobFields; blocks: DemoBlock[]; finalState: "draft" | "released" | "verified" }[] = [
+export const DEMO_JOBS: { customer: number; fields: JobFields; blocks: DemoBlock[]; finalState: "draft" | "released" | "verified" }[] = [
   {
     customer: 0,
     finalState: "verified",
@@ -82,8 +82,8 @@ const DEMO_JOBS: { customer: number; fields: JobFields; blocks: DemoBlock[]; fin
         side: "primary",
         mainJetDiameterM: 0.076 * IN,
         stages: [
-          stage({ valveKind: "vacuum", vacuumRatingPa: 6.5 * INHG, targetKind: "percentMainJet", targetTo: 30 }),
-          stage({ valveKind: "boost", setpointPa: 3 * PSI, targetKind: "percentMainJet", targetTo: 30 }),
+          stage({ valveKind: "vacuum", vacuumRatingPa: 6.5 * INHG, targetKind: "percentMainJet", targetTo: 13, mode: "part" }),
+          stage({ valveKind: "boost", setpointPa: 2 * PSI, targetKind: "lambda", targetFrom: 0.93, targetTo: 0.83, mode: "full" }),
         ],
       },
       {
@@ -91,7 +91,7 @@ const DEMO_JOBS: { customer: number; fields: JobFields; blocks: DemoBlock[]; fin
         ...secondaryTube,
         side: "secondary",
         mainJetDiameterM: 0.086 * IN,
-        stages: [stage({ valveKind: "boost", setpointPa: 6 * PSI, targetKind: "percentMainJet", targetTo: 50 })],
+        stages: [stage({ valveKind: "boost", setpointPa: 5 * PSI, targetKind: "lambda", targetFrom: 0.87, targetTo: 0.78, mode: "full" })],
       },
     ],
   },
@@ -114,8 +114,10 @@ const DEMO_JOBS: { customer: number; fields: JobFields; blocks: DemoBlock[]; fin
         side: "primary",
         mainJetDiameterM: 0.098 * IN,
         stages: [
-          stage({ valveKind: "vacuum", vacuumRatingPa: 5.5 * INHG, targetKind: "percentMainJet", targetTo: 28 }),
-          stage({ valveKind: "boost", setpointPa: 4 * PSI, targetKind: "lambda", targetFrom: 0.86, targetTo: 0.64 }),
+          stage({ valveKind: "vacuum", vacuumRatingPa: 5.5 * INHG, targetKind: "percentMainJet", targetTo: 13, mode: "part" }),
+          stage({ valveKind: "boost", setpointPa: 2 * PSI, targetKind: "lambda", targetFrom: 0.93, targetTo: 0.84, mode: "full" }),
+          // Part throttle under boost (a cruise up a grade) has only the primary side: its own stage.
+          stage({ valveKind: "boost", setpointPa: 8 * PSI, targetKind: "lambda", targetFrom: 0.89, targetTo: 0.8, mode: "part" }),
         ],
       },
       {
@@ -123,7 +125,10 @@ const DEMO_JOBS: { customer: number; fields: JobFields; blocks: DemoBlock[]; fin
         ...secondaryTube,
         side: "secondary",
         mainJetDiameterM: 0.104 * IN,
-        stages: [stage({ valveKind: "boost", setpointPa: 8 * PSI, targetKind: "percentMainJet", targetTo: 70 })],
+        stages: [
+          stage({ valveKind: "boost", setpointPa: 5.5 * PSI, targetKind: "lambda", targetFrom: 0.91, targetTo: 0.81, mode: "full" }),
+          stage({ valveKind: "boost", setpointPa: 9 * PSI, targetKind: "lambda", targetFrom: 0.87, targetTo: 0.8, mode: "full" }),
+        ],
       },
     ],
   },
@@ -145,8 +150,10 @@ const DEMO_JOBS: { customer: number; fields: JobFields; blocks: DemoBlock[]; fin
         channelLengthM: 0.6 * IN,
         mainJetDiameterM: 0.13 * IN,
         stages: [
-          stage({ valveKind: "vacuum", vacuumRatingPa: 4.5 * INHG, targetKind: "percentMainJet", targetTo: 35 }),
-          stage({ valveKind: "boost", setpointPa: 4 * PSI, targetKind: "percentMainJet", targetTo: 25 }),
+          stage({ valveKind: "vacuum", vacuumRatingPa: 4.5 * INHG, targetKind: "percentMainJet", targetTo: 13, mode: "part" }),
+          stage({ valveKind: "boost", setpointPa: 2 * PSI, targetKind: "percentMainJet", targetTo: 12, mode: "full" }),
+          stage({ valveKind: "boost", setpointPa: 6 * PSI, targetKind: "percentMainJet", targetTo: 11, mode: "full" }),
+          stage({ valveKind: "boost", setpointPa: 10 * PSI, targetKind: "percentMainJet", targetTo: 9, mode: "full" }),
         ],
       },
     ],

@@ -7,6 +7,7 @@ import { fuelProperties } from "@/lib/engineering/fuels";
 import { fuelSpecOf } from "@/lib/job-plan";
 import { SHOP_FLOOR_STATES } from "@/lib/job-states";
 import { travelerOperations } from "@/lib/traveler/operations";
+import { travelerPlanNotes } from "@/lib/traveler/plan-notes";
 import type { TravelerData } from "@/lib/traveler/types";
 import { getDb } from "./client";
 import type { Viewer } from "./jobs";
@@ -50,6 +51,7 @@ export async function getTravelerData(viewer: Viewer, input: { blockId: string; 
       number: planRevisions.number,
       status: planRevisions.status,
       snapshot: planRevisions.snapshot,
+      acknowledgedWarnings: planRevisions.acknowledgedWarnings,
       approvedAt: planRevisions.approvedAt,
       approvedBy: approvers.name,
       releasedAt: planRevisions.releasedAt,
@@ -99,6 +101,8 @@ export async function getTravelerData(viewer: Viewer, input: { blockId: string; 
       rows,
       snapshot.plan.blocks.find((b) => b.blockId === input.blockId),
     ),
+    planNotes: travelerPlanNotes(snapshot.plan.warnings, input.blockId),
+    acknowledgedDangers: Array.isArray(revision.acknowledgedWarnings) ? revision.acknowledgedWarnings.length : 0,
     benchUrl: benchUrl(found.block.id, revision.number),
   };
 }

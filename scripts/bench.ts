@@ -88,6 +88,8 @@ const TRAVELER: TravelerData = {
     tuner: "Mara Quillon",
   },
   operations: travelerOperations(TRAVELER_BLOCK.operations, TRAVELER_BLOCK),
+  planNotes: [],
+  acknowledgedDangers: 0,
   benchUrl: `http://127.0.0.1:3000/bench/${TRAVELER_BLOCK.blockId}?revision=1`,
 };
 

@@ -83,6 +83,9 @@ const s = StyleSheet.create({
   factValue: { fontSize: 9 },
   factFigure: { fontFamily: FIGURE_FACE, fontSize: 9 },
   intro: { flexDirection: "row", marginBottom: 10 },
+  planNotes: { marginBottom: 10 },
+  planNote: { fontSize: 8, lineHeight: 1.3, marginBottom: 2 },
+  planNoteLevel: { fontWeight: 700 },
   sectionTitle: { fontSize: 8, fontWeight: 700, textTransform: "uppercase", borderBottomWidth: 1.5, borderBottomColor: INK, paddingBottom: 2, marginBottom: 4 },
   figure: { fontFamily: FIGURE_FACE },
   opsTitle: { fontSize: 8, fontWeight: 700, textTransform: "uppercase", marginBottom: 3 },
@@ -280,6 +283,27 @@ function Facts({ data }: { data: TravelerData }) {
   );
 }
 
+/** What the plan says about itself that concerns this block, graded; nothing when the plan holds together. */
+function PlanNotes({ data }: { data: TravelerData }) {
+  if (data.planNotes.length === 0 && data.acknowledgedDangers === 0) return null;
+  return (
+    <View style={s.planNotes} wrap={false}>
+      <Text style={s.sectionTitle}>Plan notes</Text>
+      {data.acknowledgedDangers > 0 ? (
+        <Text style={s.planNote}>
+          {`Approved with ${data.acknowledgedDangers} danger warning${data.acknowledgedDangers > 1 ? "s" : ""} acknowledged by the approver: check the mixture on the dyno before full boost.`}
+        </Text>
+      ) : null}
+      {data.planNotes.map((note, i) => (
+        <Text key={i} style={s.planNote}>
+          <Text style={s.planNoteLevel}>{`${note.level} · `}</Text>
+          {note.message}
+        </Text>
+      ))}
+    </View>
+  );
+}
+
 /** The cautions of the bench work and the deferral to qualified practice, beside the code that opens the bench page. */
 function SafetyAndCode({ data, qr }: { data: TravelerData; qr: QrDrawing }) {
   return (
@@ -463,6 +487,7 @@ export function TravelerDocument({ data, qr, paper, printedAt }: TravelerDocumen
         <Header data={data} />
         <Facts data={data} />
         <SafetyAndCode data={data} qr={qr} />
+        <PlanNotes data={data} />
         {data.operations.map((op, i) => (
           <Operation key={op.number} op={op} lead={i === 0 ? "Operations, in order" : undefined} />
         ))}

@@ -188,7 +188,9 @@ export interface MixtureSweep {
 
 /** The sweep from a vacuum to peak boost, in lambda, with full throttle from where it can happen. */
 export function mixtureSweep(model: StagingModel, fromGaugePa: number, points: number): MixtureSweep {
-  const fullThrottleFromGaugePa = cruiseEndsGaugePa(model.valves);
+  // Just above the vacuum valve's opening (1 Pa): at the opening itself the valve is still shut and the engine cruising.
+  const cruiseEnds = cruiseEndsGaugePa(model.valves);
+  const fullThrottleFromGaugePa = cruiseEnds < 0 ? cruiseEnds + 1 : 0;
   const target = model.target as { peakBoostGaugePa: number };
   const sweep = sweepStaging(model, { fromGaugePa, toGaugePa: target.peakBoostGaugePa, points, band: MIXTURE_BAND, fullThrottleFromGaugePa });
   return { sweep, fullThrottleFromGaugePa };

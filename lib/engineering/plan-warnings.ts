@@ -23,7 +23,9 @@ export type PlanWarningCode =
   | "plug_note"
   | "grind_refused"
   | "tube_does_not_fit"
-  | "secondary_first";
+  | "secondary_first"
+  /** A warning kept as a plain sentence by a revision approved before warnings were graded. */
+  | "plan_note";
 
 export interface PlanWarning {
   code: PlanWarningCode;

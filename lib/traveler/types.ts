@@ -59,6 +59,12 @@ export interface TravelerData {
     tuner: string;
   };
   operations: TravelerOperation[];
+  /**
+   * What the plan says about itself that the bench should know: this block's warnings and the whole plan's
+   * serious ones, most serious first; and whether the approver acknowledged danger warnings.
+   */
+  planNotes: { level: "notice" | "caution" | "warning" | "danger"; message: string }[];
+  acknowledgedDangers: number;
   /** Absolute URL the QR code opens: the bench page of this block in this revision. */
   benchUrl: string;
 }

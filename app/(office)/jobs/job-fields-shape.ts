@@ -8,6 +8,15 @@ export const DISPLACEMENT_UNITS = ["in³", "L", "cc"] as const satisfies readonl
 export const POWER_UNITS = ["hp", "kW"] as const satisfies readonly PowerUnit[];
 export const BOOST_UNITS = ["psi", "kPa", "bar"] as const satisfies readonly PressureUnit[];
 export const TEMPERATURE_UNITS = ["°F", "°C", "K"] as const satisfies readonly TemperatureUnit[];
+/** A barometer's station reading (absolute). */
+export const AMBIENT_PRESSURE_UNITS = ["inHg", "kPa", "psi"] as const satisfies readonly PressureUnit[];
+export const ELEVATION_UNITS = ["ft", "m"] as const;
+
+export const DRILL_SYSTEM_OPTIONS = [
+  { value: "inch", label: "Inch sizes (number, letter, fraction)" },
+  { value: "metric", label: "Metric sizes" },
+  { value: "mixed", label: "Both inch and metric" },
+] as const;
 
 export const FUEL_OPTIONS = [
   { value: "gasoline", label: "Gasoline" },
@@ -33,6 +42,10 @@ export type JobFieldsForm = {
   intercooled?: boolean;
   chargeTemperature?: Quantity<(typeof TEMPERATURE_UNITS)[number]>;
   ambientTemperature?: Quantity<(typeof TEMPERATURE_UNITS)[number]>;
+  ambientPressure?: Quantity<(typeof AMBIENT_PRESSURE_UNITS)[number]>;
+  siteElevation?: Quantity<(typeof ELEVATION_UNITS)[number]>;
+  cruiseLambda?: number;
+  drillSystem?: (typeof DRILL_SYSTEM_OPTIONS)[number]["value"];
   compressorEfficiencyPct?: number;
   intercoolerEffectivenessPct?: number;
   useAllDrills?: boolean;

@@ -19,6 +19,7 @@ import {
   type JobFieldsForm,
 } from "../job-fields-shape";
 import { CheckboxField } from "@/components/forms/checkbox-field";
+import { SiteFields } from "../site-fields";
 
 type NewJobFields = JobFieldsForm & { customerId?: string; newCustomerName?: string; tunerId?: string };
 
@@ -45,6 +46,10 @@ function startingValues(system: "imperial" | "metric", tunerId: string): NewJobF
     ambientTemperature: imperial ? { value: 77, unit: "°F" } : { value: 25, unit: "°C" },
     compressorEfficiencyPct: 70,
     intercoolerEffectivenessPct: 70,
+    ambientPressure: { unit: imperial ? "inHg" : "kPa" },
+    siteElevation: { unit: imperial ? "ft" : "m" },
+    cruiseLambda: 1.0,
+    drillSystem: imperial ? "inch" : "metric",
   };
 }
 
@@ -152,6 +157,7 @@ export function NewJobForm({
         />
       </FieldGroup>
 
+      <SiteFields fields={{ ambientPressure: fields.ambientPressure, siteElevation: fields.siteElevation, cruiseLambda: fields.cruiseLambda, drillSystem: fields.drillSystem }} />
       <FieldGroup title="Charge air" columns={3}>
         <CheckboxField field={fields.intercooled} label="Intercooled" hint="Tick when the charge passes an intercooler before the carburetor." />
         <QuantityField

@@ -72,16 +72,18 @@ export function BlockFields({
           <QuantityField label="Bend radius" field={f.tubeBendRadius} units={FORM_LENGTH_UNITS} optional hint="Centreline." />
           <QuantityField label="Second straight run" field={f.tubeRun2} units={FORM_LENGTH_UNITS} optional />
           <QuantityField label="Swage engagement" field={f.tubeSwage} units={FORM_LENGTH_UNITS} optional />
+          <QuantityField label="Room rearward" field={f.tubeMaxRearward} units={FORM_LENGTH_UNITS} optional hint="How far back the bowl lets the tube reach." />
+          <QuantityField label="Room downward" field={f.tubeMaxDownward} units={FORM_LENGTH_UNITS} optional hint="How far down, so the bowl still comes off." />
         </FieldGroup>
       ) : null}
       <div className="flex flex-col gap-3">
         <h3 className="text-xs font-semibold uppercase tracking-[0.12em] text-pencil">Enrichment stages, in opening order</h3>
         <FieldErrors id={f.stages.errorId} errors={f.stages.errors} />
         {stages.map((stage, i) => (
-          <StageFields key={stage.key} form={form} stage={stage} listName={f.stages.name} index={i} removable={stages.length > 1} />
+          <StageFields key={stage.key} form={form} stage={stage} listName={f.stages.name} index={i} removable={stages.length > 1} side={side === "secondary" ? "secondary" : "primary"} />
         ))}
         {stages.length < MAX_STAGES ? (
-          <Button type="submit" variant="secondary" className="self-start" {...form.insert.getButtonProps({ name: f.stages.name, defaultValue: newStage(unit) })}>
+          <Button type="submit" variant="secondary" className="self-start" {...form.insert.getButtonProps({ name: f.stages.name, defaultValue: newStage(unit, "boost", side === "secondary" ? "full" : "part") })}>
             Add a stage to the {side} block
           </Button>
         ) : null}

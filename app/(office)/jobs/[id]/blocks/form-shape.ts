@@ -20,6 +20,12 @@ export const TARGET_OPTIONS = [
   { value: "area", label: "Restriction area" },
 ] as const;
 
+/** The throttle mode a mixture target is read in (the secondary side only meters at full throttle). */
+export const MODE_OPTIONS = [
+  { value: "part", label: "Part throttle (primary side alone)" },
+  { value: "full", label: "Full throttle (both sides)" },
+] as const;
+
 export const SIDE_OPTIONS = [
   { value: "primary", label: "Primary" },
   { value: "secondary", label: "Secondary" },
@@ -30,6 +36,7 @@ export type StageForm = {
   vacuumRating?: Quantity<(typeof VACUUM_UNITS)[number]>;
   setpoint?: Quantity<(typeof SETPOINT_UNITS)[number]>;
   targetKind?: (typeof TARGET_OPTIONS)[number]["value"];
+  mode?: (typeof MODE_OPTIONS)[number]["value"];
   targetFrom?: number;
   targetTo?: number;
   targetArea?: Quantity<FormAreaUnit>;
@@ -55,19 +62,22 @@ export type BlockForm = {
   tubeBendDeg?: number;
   tubeBendRadius?: Quantity<FormLengthUnit>;
   tubeSwage?: Quantity<FormLengthUnit>;
+  tubeMaxRearward?: Quantity<FormLengthUnit>;
+  tubeMaxDownward?: Quantity<FormLengthUnit>;
   stages?: StageForm[];
 };
 
 export type BlocksForm = { blocks?: BlockForm[] };
 
 /** A new stage as the "add a stage" button inserts it. */
-export function newStage(length: FormLengthUnit, valveKind: "vacuum" | "boost" = "boost"): StageForm {
+export function newStage(length: FormLengthUnit, valveKind: "vacuum" | "boost" = "boost", mode: "part" | "full" = "full"): StageForm {
   const area: FormAreaUnit = length === "in" ? "in²" : "mm²";
   return {
     valveKind,
     vacuumRating: { unit: "inHg" },
     setpoint: { unit: "psi" },
     targetKind: "afr",
+    mode,
     targetArea: { unit: area },
     valveWindowArea: { unit: area },
     maxHoles: 4,
@@ -94,6 +104,8 @@ export function newBlock(side: "primary" | "secondary", length: FormLengthUnit):
     tubeRun2: q,
     tubeBendRadius: q,
     tubeSwage: q,
-    stages: [newStage(length, side === "primary" ? "vacuum" : "boost")],
+    tubeMaxRearward: q,
+    tubeMaxDownward: q,
+    stages: [newStage(length, side === "primary" ? "vacuum" : "boost", side === "primary" ? "part" : "full")],
   };
 }

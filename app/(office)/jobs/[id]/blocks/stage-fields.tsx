@@ -7,7 +7,7 @@ import { QuantityField } from "@/components/forms/quantity-field";
 import { SelectField } from "@/components/forms/select-field";
 import { Button } from "@/components/ui/button";
 import { FORM_AREA_UNITS } from "@/lib/form-units";
-import { SETPOINT_UNITS, TARGET_OPTIONS, VACUUM_UNITS, VALVE_OPTIONS, type BlocksForm, type StageForm } from "./form-shape";
+import { MODE_OPTIONS, SETPOINT_UNITS, TARGET_OPTIONS, VACUUM_UNITS, VALVE_OPTIONS, type BlocksForm, type StageForm } from "./form-shape";
 
 /** One enrichment stage: the valve, when it opens, how much it must add, and the most holes allowed. */
 export function StageFields({
@@ -16,9 +16,12 @@ export function StageFields({
   listName,
   index,
   removable,
+  side,
 }: {
   form: FormMetadata<BlocksForm, string[]>;
   stage: FieldMetadata<StageForm, BlocksForm, string[]>;
+  /** The block's side: a secondary stage is always read in full throttle. */
+  side: "primary" | "secondary";
   listName: string;
   index: number;
   removable: boolean;
@@ -48,9 +51,14 @@ export function StageFields({
           <>
             <NumberField label={target === "afr" ? "AFR before" : "Lambda before"} field={f.targetFrom} hint="Without this stage." />
             <NumberField label={target === "afr" ? "AFR after" : "Lambda after"} field={f.targetTo} hint="With it open: richer." />
+            {side === "primary" ? (
+              <SelectField label="Read in" field={f.mode} options={MODE_OPTIONS} hint="The whole engine's mixture in that mode." />
+            ) : (
+              <input type="hidden" name={f.mode.name} value="full" />
+            )}
           </>
         ) : null}
-        {target === "percentMainJet" ? <NumberField label="Enrichment" field={f.targetTo} suffix="%" hint="Of the main-jet area." /> : null}
+        {target === "percentMainJet" ? <NumberField label="Enrichment" field={f.targetTo} suffix="%" hint="Of this block's own main-jet area." /> : null}
         {target === "area" ? <QuantityField label="Restriction area" field={f.targetArea} units={FORM_AREA_UNITS} /> : null}
         <QuantityField label="Valve window area" field={f.valveWindowArea} units={FORM_AREA_UNITS} optional hint="The valve's own flow area." />
         <NumberField label="Most holes" field={f.maxHoles} suffix="holes" hint="1 to 4 in the channel." />

@@ -34,6 +34,11 @@ export function jobFormValues(job: Job, unit: DisplayLengthUnit): JobFieldsForm 
     compressorEfficiencyPct: typed(job.compressorEfficiency * 100),
     intercoolerEffectivenessPct: typed(job.intercoolerEffectiveness * 100),
     useAllDrills: job.useAllDrills,
+    ...(job.siteElevationM !== null
+      ? { siteElevation: inch ? { value: typed(job.siteElevationM / 0.3048), unit: "ft" as const } : { value: typed(job.siteElevationM), unit: "m" as const } }
+      : { ambientPressure: inch ? { value: typed(fromSI("pressure", job.ambientPressurePa, "inHg")), unit: "inHg" as const } : { value: typed(fromSI("pressure", job.ambientPressurePa, "kPa")), unit: "kPa" as const } }),
+    cruiseLambda: job.cruiseLambda,
+    drillSystem: job.drillSystem,
     notes: job.notes,
   };
 }

@@ -11,6 +11,7 @@ import { Field, FormMessage, Input, Textarea } from "@/components/ui/field";
 import type { FormResult } from "@/lib/form-action";
 import { CheckboxField } from "@/components/forms/checkbox-field";
 import { BOOST_UNITS, DISPLACEMENT_UNITS, FUEL_OPTIONS, POWER_UNITS, TEMPERATURE_UNITS, type JobFieldsForm } from "../../job-fields-shape";
+import { SiteFields } from "../../site-fields";
 
 /** Engine, fuel and boost of one job. Checked on the server; what was typed stays after an error. */
 export function JobFieldsEditor({
@@ -58,6 +59,7 @@ export function JobFieldsEditor({
         <NumberField label="Target lambda at 0 psi" field={fields.targetLambdaAtmosphere} suffix="λ" />
         <NumberField label="Target lambda at peak boost" field={fields.targetLambdaPeak} suffix="λ" />
       </FieldGroup>
+      <SiteFields fields={{ ambientPressure: fields.ambientPressure, siteElevation: fields.siteElevation, cruiseLambda: fields.cruiseLambda, drillSystem: fields.drillSystem }} />
       <FieldGroup title="Charge air" columns={3}>
         <QuantityField label="Ambient temperature" field={fields.ambientTemperature} units={TEMPERATURE_UNITS} />
         <QuantityField
