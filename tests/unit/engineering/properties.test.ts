@@ -108,7 +108,7 @@ describe("hole layout properties", () => {
       }),
       { numRuns: 100 },
     );
-  });
+  }, 30_000);
 });
 
 describe("hole layout within a shop's limits", () => {
@@ -128,7 +128,8 @@ describe("hole layout within a shop's limits", () => {
       }),
       { numRuns: 100 },
     );
-  });
+    // Hundreds of candidates a run: slow on a loaded machine, and speed is not what this checks.
+  }, 30_000);
 });
 
 describe("staging properties", () => {
