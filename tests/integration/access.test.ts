@@ -12,6 +12,7 @@ import { settle } from "./support/redirect";
 import { GET as listJobsRoute, POST as createJobRoute } from "@/app/api/jobs/route";
 import { GET as readJobRoute, PATCH as patchJobRoute } from "@/app/api/jobs/[id]/route";
 import { POST as jobStateRoute } from "@/app/api/jobs/[id]/state/route";
+import { GET as jobPlanRoute } from "@/app/api/jobs/[id]/plan/route";
 import { GET as travelerRoute } from "@/app/api/blocks/[blockId]/traveler/route";
 import { blockIdOf } from "./support/jobs";
 import { POST as signOffRoute } from "@/app/api/operations/[id]/sign-off/route";
@@ -159,6 +160,18 @@ const CASES: AccessCase[] = [
     expected: { anonymous: 401, machinist: 404, tuner: 200, admin: 200 },
     setup: async () => (await makeJob("draft")).id,
     call: async (id) => (await readJobRoute(new Request(`http://127.0.0.1/api/jobs/${id}`), jobParams(id))).status,
+  },
+  {
+    name: "GET /api/jobs/{id}/plan (released)",
+    expected: EVERYONE(200),
+    setup: async () => (await makeJob("released")).id,
+    call: async (id) => (await jobPlanRoute(new Request(`http://127.0.0.1/api/jobs/${id}/plan`), jobParams(id))).status,
+  },
+  {
+    name: "GET /api/jobs/{id}/plan (draft: not on the shop floor)",
+    expected: { anonymous: 401, machinist: 404, tuner: 200, admin: 200 },
+    setup: async () => (await makeJob("draft")).id,
+    call: async (id) => (await jobPlanRoute(new Request(`http://127.0.0.1/api/jobs/${id}/plan`), jobParams(id))).status,
   },
   {
     name: "PATCH /api/jobs/{id}",

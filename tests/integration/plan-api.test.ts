@@ -1,7 +1,7 @@
 import { beforeEach, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { POST as createRoute } from "@/app/api/jobs/route";
-import { PATCH as patchRoute } from "@/app/api/jobs/[id]/route";
+import { GET as readRoute, PATCH as patchRoute } from "@/app/api/jobs/[id]/route";
 import { GET as planRoute } from "@/app/api/jobs/[id]/plan/route";
 import { POST as stateRoute } from "@/app/api/jobs/[id]/state/route";
 import { DEMO_JOBS, seedDemoShop } from "@/db/seed-shop";
@@ -110,7 +110,8 @@ describe("the job's conditions", () => {
     // 5 000 ft = 1 524 m (NIST SP 811: 1 ft = 0.3048 m); ISO 2533 at 1 524 m: 84 307 Pa (P0 (1 - 0.0065 h / 288.15)^5.25588).
     const response = await createRoute(jsonRequest("/api/jobs", "POST", jobBody({ siteElevation: { value: 5000, unit: "ft" }, cruiseLambda: 0.98 })));
     expect(response.status).toBe(201);
-    const { job } = await response.json();
+    const created = (await response.json()).job;
+    const { job } = await (await readRoute(get(`/api/jobs/${created.id}`), params(created.id))).json();
     expect(job.engine.siteElevationM).toBeCloseTo(1524, 6);
     expect(job.engine.ambientPressurePa).toBeCloseTo(84_307, -1);
     expect(job.engine.cruiseLambda).toBe(0.98);
@@ -120,7 +121,9 @@ describe("the job's conditions", () => {
     await actAs("tuner");
     const ok = await createRoute(jsonRequest("/api/jobs", "POST", jobBody({ ambientPressure: { value: 24.6, unit: "inHg" } })));
     // 24.6 inHg x 3386.389 Pa/inHg (NIST SP 811) = 83 305 Pa
-    expect((await ok.json()).job.engine.ambientPressurePa).toBeCloseTo(83_305.2, 0);
+    const created = (await ok.json()).job;
+    const { job } = await (await readRoute(get(`/api/jobs/${created.id}`), params(created.id))).json();
+    expect(job.engine.ambientPressurePa).toBeCloseTo(83_305.2, 0);
     for (const [body, field] of [
       [jobBody({ ambientPressure: { value: 84, unit: "kPa" }, siteElevation: { value: 1500, unit: "m" } }), "siteElevation"],
       [jobBody({ ambientPressure: { value: 14.7, unit: "kPa" } }), "ambientPressure.value"],
