@@ -33,10 +33,11 @@ function pressureText(psi: number): string {
   return `${fixed(psi, 1)} psi boost`;
 }
 
+/** How far the mixture is from the target, in lambda: supplied / needed area = target / predicted lambda. */
 function mixtureText(ratio: number): string {
-  const pct = (ratio - 1) * 100;
+  const pct = (1 / ratio - 1) * 100;
   if (Math.abs(pct) < 0.05) return "on target";
-  return `${fixed(Math.abs(pct), 1)} % ${pct < 0 ? "lean" : "rich"}`;
+  return `${fixed(Math.abs(pct), 1)} % ${pct > 0 ? "lean" : "rich"}`;
 }
 
 function ChartTooltip({ active, payload, unit }: { active?: boolean; payload?: { payload: Row }[]; unit: DisplayLengthUnit }) {

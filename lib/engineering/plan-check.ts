@@ -205,7 +205,10 @@ export function sweepWarnings(sweep: StagingSweep): PlanWarning[] {
   const warnings: PlanWarning[] = [];
   for (const zone of sweep.zones) {
     const mode = zone.mode === "part" ? "Part" : "Full";
-    const span = `${mode} throttle from ${pressureText(zone.fromGaugePa)} to ${pressureText(zone.toGaugePa)}`;
+    const span =
+      zone.fromGaugePa === zone.toGaugePa
+        ? `${mode} throttle at ${pressureText(zone.fromGaugePa)}`
+        : `${mode} throttle from ${pressureText(zone.fromGaugePa)} to ${pressureText(zone.toGaugePa)}`;
     const leanBy = 1 / zone.worstRatio - 1;
     if (zone.kind === "lean" && zone.toGaugePa > 0) {
       warnings.push({
@@ -220,7 +223,7 @@ export function sweepWarnings(sweep: StagingSweep): PlanWarning[] {
         message: `${span} runs lean of the target by up to ${(leanBy * 100).toFixed(1)} %: under vacuum the main jets (or the vacuum valve) set the mixture, not the boost stages.`,
       });
     } else {
-      warnings.push({ code: "rich_zone", level: "notice", message: `${span} runs rich: up to ${((zone.worstRatio - 1) * 100).toFixed(1)} % more fuel than the target.` });
+      warnings.push({ code: "rich_zone", level: "notice", message: `${span} runs rich: up to ${((1 - 1 / zone.worstRatio) * 100).toFixed(1)} % richer than the target.` });
     }
   }
   return warnings;

@@ -88,6 +88,15 @@ test("a tuner plans, approves and releases a job; the machinist reads it; an edi
   await expect(layouts.locator("tr[data-chosen] td").first()).toHaveText(label);
   await page.screenshot({ path: screenshotPath("planner"), fullPage: true });
 
+  // Only a primary boost valve at 3 psi and a 14 % secondary stage for 9 psi: the plan runs lean beyond 10 %
+  // under boost, so approving it needs the tuner's explicit acknowledgement.
+  const warnings = page.getByRole("region", { name: "Plan warnings" });
+  await expect(warnings.locator('[data-level="danger"]').first()).toBeVisible();
+  const stateForm = page.getByRole("form", { name: "Job state" });
+  await stateForm.getByRole("button", { name: "Approve as revision 1" }).click();
+  await expect(stateForm.getByRole("alert")).toContainText(/danger warning/);
+  await expect(job.state()).toHaveText("draft");
+  await stateForm.getByRole("checkbox", { name: /danger warning/ }).check();
   await job.move("Approve as revision 1", /Revision 1 approved/);
   await expect(job.state()).toHaveText("planned");
   await job.move("Release to the bench", /released/);

@@ -19,7 +19,7 @@ export function benchJobBody(customer: string) {
     fuelKind: "gasoline",
     peakBoost: { value: 8, unit: "psi" },
     targetLambdaAtmosphere: 0.88,
-    targetLambdaPeak: 0.78,
+    targetLambdaPeak: 0.86,
     intercooled: true,
     ambientTemperature: { value: 25, unit: "°C" },
     compressorEfficiencyPct: 70,
@@ -34,7 +34,7 @@ export function benchBlocksBody() {
     blocks: [
       {
         side: "primary",
-        mainJetDiameter: { value: 0.074, unit: "in" },
+        mainJetDiameter: { value: 0.076, unit: "in" },
         mainJetCount: 2,
         channelLength: { value: 0.3, unit: "in" },
         minWeb: { value: 0.03, unit: "in" },
@@ -42,15 +42,16 @@ export function benchBlocksBody() {
         passageWall: { value: 0.2, unit: "in" },
         passageDepth: { value: 0.4, unit: "in" },
         stages: [
-          { valveKind: "vacuum", vacuumRating: { value: 6.5, unit: "inHg" }, targetKind: "percentMainJet", targetTo: 25, maxHoles: 4 },
-          { valveKind: "boost", setpoint: { value: 3, unit: "psi" }, targetKind: "afr", targetFrom: 12.5, targetTo: 11.5, maxHoles: 4 },
+          // The integration fixture's plan, which holds together on the whole-engine model (no danger to acknowledge).
+          { valveKind: "vacuum", vacuumRating: { value: 6.5, unit: "inHg" }, targetKind: "percentMainJet", targetTo: 12, maxHoles: 4 },
+          { valveKind: "boost", setpoint: { value: 3, unit: "psi" }, targetKind: "afr", mode: "full", targetFrom: 14.0, targetTo: 12.2, maxHoles: 4 },
         ],
       },
       {
         side: "secondary",
-        mainJetDiameter: { value: 0.084, unit: "in" },
+        mainJetDiameter: { value: 0.086, unit: "in" },
         mainJetCount: 2,
-        stages: [{ valveKind: "boost", setpoint: { value: 7, unit: "psi" }, targetKind: "lambda", targetFrom: 0.85, targetTo: 0.78, maxHoles: 4 }],
+        stages: [{ valveKind: "boost", setpoint: { value: 7, unit: "psi" }, targetKind: "lambda", targetFrom: 0.95, targetTo: 0.82, maxHoles: 4 }],
       },
     ],
   };
