@@ -4,6 +4,7 @@ import { getRevisionSnapshot, solveJob } from "@/db/revisions";
 import type { Job } from "@/db/schema";
 import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
 import { RequestRefusal } from "@/lib/errors";
+import { snapshotJob, snapshotPlan } from "@/lib/job-plan";
 
 /** The plan the job stands on: the job as it was, its blocks and the solved plan, and where it came from. */
 export interface ShownPlan {
@@ -25,8 +26,8 @@ export async function shownPlanOf(record: JobRecord): Promise<ShownPlan | undefi
     const revision = await getRevisionSnapshot(job.id, job.currentRevision);
     if (!revision) return undefined;
     return {
-      job: revision.snapshot.job as unknown as Job,
-      plan: revision.snapshot.plan,
+      job: snapshotJob(revision.snapshot.job),
+      plan: snapshotPlan(revision.snapshot),
       blocks: revision.snapshot.blocks,
       revision: job.currentRevision,
       source: `As approved in revision ${job.currentRevision}.`,

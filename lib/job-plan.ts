@@ -3,6 +3,8 @@ import { planConversion, type BlockInput, type ConversionPlan, type EngineInput,
 import { fuelProperties, type FuelSpec } from "@/lib/engineering/fuels";
 import type { Drill } from "@/lib/engineering/types";
 import { restrictionDrillLimits } from "@/lib/engineering/restriction-limits";
+import { isCurrentPlan, upgradePlan } from "@/lib/engineering/plan-upgrade";
+import { STANDARD_ATMOSPHERE_PA } from "@/lib/engineering/units";
 import type { Job } from "@/db/schema";
 import type { BlockRow, StageRow } from "@/db/jobs";
 import { RequestRefusal } from "@/lib/errors";
@@ -115,4 +117,18 @@ export function planJob(
     if (error instanceof RangeError) throw new RequestRefusal(409, `The plan cannot be solved: ${error.message}`);
     throw error;
   }
+}
+
+/** Columns a job gained after some revisions were approved, with the values those revisions were planned on. */
+const EARLIER_JOB_DEFAULTS = { ambientPressurePa: STANDARD_ATMOSPHERE_PA, siteElevationM: null, cruiseLambda: 1, drillSystem: "inch" } as const;
+
+/** The job as an approved revision kept it, with the columns it did not yet have. */
+export function snapshotJob(job: Record<string, unknown>): Job {
+  return { ...EARLIER_JOB_DEFAULTS, ...job } as unknown as Job;
+}
+
+/** An approved revision's plan, ready for the present screens (see plan-upgrade.ts); the snapshot is not changed. */
+export function snapshotPlan(snapshot: { job: Record<string, unknown>; blocks: BlockRow[]; plan: ConversionPlan }): ConversionPlan {
+  if (isCurrentPlan(snapshot.plan)) return snapshot.plan;
+  return upgradePlan(snapshot.plan, engineInputOf(snapshotJob(snapshot.job)), snapshot.blocks.map(blockInputOf));
 }

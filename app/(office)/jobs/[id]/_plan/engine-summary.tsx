@@ -3,6 +3,7 @@ import type { Job } from "@/db/schema";
 import type { DisplayLengthUnit } from "@/lib/display";
 import { FUEL_KIND_LABELS, fuelProperties } from "@/lib/engineering/fuels";
 import { fuelSpecOf } from "@/lib/job-plan";
+import { fromSI, STANDARD_ATMOSPHERE_PA } from "@/lib/engineering/units";
 import { Fact, Facts } from "./facts";
 import { displacement, percent, power, psi, temperature } from "./format";
 
@@ -24,7 +25,11 @@ export type EngineFacts = Pick<
   | "intercoolerEffectiveness"
   | "useAllDrills"
   | "notes"
->;
+> &
+  // Revisions approved before the job kept its site and cruise have none: sea level, cruise 1.0, inch drills.
+  Partial<Pick<Job, "ambientPressurePa" | "siteElevationM" | "cruiseLambda" | "drillSystem">>;
+
+const DRILL_SYSTEM_TEXT = { inch: "inch sizes", metric: "metric sizes", mixed: "inch and metric sizes" } as const;
 
 /** Engine, fuel and boost as the tuner entered them, each figure with its unit. */
 export function EngineSummary({ job, unit }: { job: EngineFacts; unit: DisplayLengthUnit }) {
@@ -57,8 +62,17 @@ export function EngineSummary({ job, unit }: { job: EngineFacts; unit: DisplayLe
       <Fact label="Compressor efficiency">{percent(job.compressorEfficiency, 0)}</Fact>
       <Fact label="Intercooler">{job.intercooled ? `${percent(job.intercoolerEffectiveness, 0)} effective` : "none"}</Fact>
       <Fact label="Ambient">{temperature(job.ambientTemperatureK, unit)}</Fact>
+      <Fact label="Ambient pressure">
+        {unit === "in" ? `${fromSI("pressure", job.ambientPressurePa ?? STANDARD_ATMOSPHERE_PA, "inHg").toFixed(2)} inHg` : `${fromSI("pressure", job.ambientPressurePa ?? STANDARD_ATMOSPHERE_PA, "kPa").toFixed(1)} kPa`}
+        {job.siteElevationM !== null && job.siteElevationM !== undefined
+          ? ` · standard atmosphere at ${unit === "in" ? `${(job.siteElevationM / 0.3048).toFixed(0)} ft` : `${job.siteElevationM.toFixed(0)} m`}`
+          : " absolute"}
+      </Fact>
+      <Fact label="Cruise target">
+        λ {(job.cruiseLambda ?? 1).toFixed(2)} · AFR {afr(job.cruiseLambda ?? 1)}
+      </Fact>
       <Fact label="Drills solved from" plain>
-        {job.useAllDrills ? "every standard drill" : "the shop's rack"}
+        {job.useAllDrills ? "every standard drill" : "the shop's rack"}, {DRILL_SYSTEM_TEXT[job.drillSystem ?? "inch"]}
       </Fact>
       {job.notes ? (
         <Fact label="Notes" plain>

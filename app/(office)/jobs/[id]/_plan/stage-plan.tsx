@@ -55,12 +55,19 @@ export function StagePlanView({
           needs <span className="numeric font-semibold">{target.first}</span> <span className="numeric text-graphite">· {target.second}</span>
         </p>
         <p className="text-sm text-graphite sm:col-span-3" data-testid="stage-basis">
-          {BASIS_TEXT[plan.basis](plan.mode, areaBoth(plan.basisAreaM2, unit).first)} Predicted lambda{" "}
-          <span className="numeric">{plan.beforeLambda.toFixed(3)}</span> before it opens,{" "}
-          <span className="numeric font-semibold" data-testid="stage-achieved-lambda">
-            {plan.achievedLambda.toFixed(3)}
-          </span>{" "}
-          after, against <span className="numeric">{plan.targetLambda.toFixed(3)}</span>.
+          {BASIS_TEXT[plan.basis](plan.mode, areaBoth(plan.basisAreaM2, unit).first)}
+          {Number.isFinite(plan.achievedLambda) ? (
+            <>
+              {" "}
+              Predicted lambda <span className="numeric">{plan.beforeLambda.toFixed(3)}</span> before it opens,{" "}
+              <span className="numeric font-semibold" data-testid="stage-achieved-lambda">
+                {plan.achievedLambda.toFixed(3)}
+              </span>{" "}
+              after, against <span className="numeric">{plan.targetLambda.toFixed(3)}</span>.
+            </>
+          ) : (
+            " Approved before plans predicted each stage's mixture."
+          )}
         </p>
       </header>
       <Table aria-label={`Hole layouts for stage ${index + 1}`}>

@@ -5,6 +5,7 @@ import { getJob } from "@/db/jobs";
 import { getRevisionSnapshot } from "@/db/revisions";
 import { ALL_ROLES, requireRole } from "@/lib/auth/session";
 import { parseIdParam } from "@/lib/route-params";
+import { snapshotPlan } from "@/lib/job-plan";
 import { PageHeader, Sheet, Tag } from "@/components/ui/sheet";
 import { EngineSummary, type EngineFacts } from "../../_plan/engine-summary";
 import { dateTime } from "../../_plan/format";
@@ -79,7 +80,7 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
           </dl>
         </Sheet>
       </div>
-      <PlanView blocks={snapshot.blocks} plan={snapshot.plan} unit={user.lengthUnit} />
+      <PlanView blocks={snapshot.blocks} plan={snapshotPlan(snapshot)} unit={user.lengthUnit} />
     </>
   );
 }
