@@ -13,7 +13,8 @@
 //   The drilled layout's area, not the ideal one, is what the stages above build on.
 // * Opening point instead of area (a simple rule): when the stage's lowest bin is rich beyond the band and its
 //   highest lean beyond it, the valve comes in too early; the reverse, too late. Its area is left alone and its
-//   opening moved by one step (default one bin width) later or earlier; read again after the move.
+//   opening moved by one step (default one bin width) later or earlier, never across zero gauge (a vacuum
+//   valve's rating stays a vacuum, a boost valve's setpoint a boost); read again after the move.
 // * Cruise errors under vacuum are the main jets' (jet-advice.ts): no stage absorbs them, and the stages are
 //   corrected with the jets as they are.
 
@@ -184,8 +185,7 @@ export function correctStages(input: StageCorrectionInput): StageCorrectionResul
         binsUsed: own.length,
         appliedBelowM2,
         change: groupChange * share,
-        opening:
-          timing === null ? null : { currentGaugePa: opening, proposedGaugePa: opening + (timing === "later" ? step : -step), direction: timing },
+        opening: timing === null ? null : { currentGaugePa: opening, proposedGaugePa: movedOpening(p.valve, timing, step), direction: timing },
       });
       results.set(p.valve.id, result);
       settled.push({ valve: p.valve, realised: result.realisedChangeM2 });
@@ -198,6 +198,12 @@ export function correctStages(input: StageCorrectionInput): StageCorrectionResul
     return c === undefined ? v : { ...v, restrictionAreaM2: c.drilledAreaM2 };
   });
   return { bins, corrections, jetAdvice, valves };
+}
+
+/** One step later or earlier; a vacuum valve stays a vacuum valve and a boost valve a boost valve (zero at most). */
+function movedOpening(valve: PowerValve, direction: "earlier" | "later", step: number): number {
+  const moved = valveOpeningGaugePa(valve) + (direction === "later" ? step : -step);
+  return valve.kind === "vacuum" ? Math.min(moved, 0) : Math.max(moved, 0);
 }
 
 /** The opening-point rule: rich at the bottom and lean at the top: later; the reverse: earlier. */

@@ -164,6 +164,23 @@ describe("correctStages", () => {
     expect(c?.change).toBe("secondary stage 1: 1 x #52, unchanged; set the valve to open at 3.9 psi (now 2.9 psi): it comes in too early");
   });
 
+  it("moves a vacuum valve's opening no further than zero gauge", () => {
+    const shallow: PowerValve = { id: "vac", side: "primary", kind: "vacuum", ratingPa: 0.5 * PA_PER_INHG, restrictionAreaM2: 1e-6 };
+    const result = correctStages({
+      model: { mainJets: MAINS, valves: [shallow], target: flat(0.8) },
+      stages: [stage("vac", "part", 1)],
+      // Hand: rated 0.5 inHg = 1693.2 Pa; the bins lie above -1693.2 Pa with the valve open, rich (-10 %) then lean (+10 %).
+      bins: [bin("part", -1000, 0.72), bin("part", 5000, 0.88)],
+      drills: DRILLS,
+      primaryMainJetDiameterM: JET_M,
+    });
+    const c = result.corrections[0];
+    // Hand: one psi later would be -1693.2 + 6894.8 = +5201.6 Pa, a boost: the rating stops at 0 inHg.
+    expect(c?.opening?.direction).toBe("later");
+    expect(c?.opening?.proposedGaugePa).toBe(0);
+    expect(c?.change).toMatch(/open at 0\.0 inHg \(now 0\.5 inHg\)/);
+  });
+
   it("says when the valve's own window keeps the stage from its area", () => {
     const result = correctStages({
       model: { mainJets: MAINS, valves: [secondary], target: flat(0.78) },
