@@ -14,6 +14,7 @@
 
 import type { MixtureBin } from "./log-bins";
 import {
+  sideCounts,
   suppliedAreaAt,
   targetAfrAt,
   valveIsOpen,
@@ -36,10 +37,6 @@ export interface JudgedBin extends MixtureBin {
   use: BinUse;
 }
 
-export function metersIn(mode: ThrottleMode, valve: Pick<PowerValve, "side">): boolean {
-  return mode === "full" || valve.side === "primary";
-}
-
 /**
  * Judges every bin against the model. `stageModes` names the throttle mode each corrected stage is read in
  * (by valve id); a valve not named answers for no bin.
@@ -59,7 +56,7 @@ export function judgeBins(
 }
 
 function useOf(valves: readonly PowerValve[], p: number, mode: ThrottleMode, stageModes: ReadonlyMap<string, ThrottleMode>): BinUse {
-  const open = valves.filter((v) => metersIn(mode, v) && valveIsOpen(v, p));
+  const open = valves.filter((v) => sideCounts(mode, v.side) && valveIsOpen(v, p));
   if (open.length === 0) return mode === "part" && p < 0 ? { kind: "cruise" } : { kind: "none" };
   const last = Math.max(...open.map(valveOpeningGaugePa));
   const valveIds = open.filter((v) => valveOpeningGaugePa(v) === last && stageModes.get(v.id) === mode).map((v) => v.id);

@@ -18,7 +18,7 @@
 // * Cruise errors under vacuum are the main jets' (jet-advice.ts): no stage absorbs them, and the stages are
 //   corrected with the jets as they are.
 
-import { judgeBins, metersIn, type JudgedBin } from "./bin-judgement";
+import { judgeBins, type JudgedBin } from "./bin-judgement";
 import { requireInRange, requirePositive } from "./checks";
 import { solveHoleLayout, type HoleLayoutCandidate } from "./hole-layout";
 import { cruiseJetAdvice, type JetAdvice } from "./jet-advice";
@@ -26,6 +26,7 @@ import { DEFAULT_BIN_WIDTH_PA, median, type MixtureBin } from "./log-bins";
 import { MIXTURE_BAND } from "./plan-check";
 import type { RestrictionDrillLimits } from "./restriction-limits";
 import {
+  sideCounts,
   valveIsOpen,
   valveOpeningGaugePa,
   type CarburetorSide,
@@ -171,7 +172,7 @@ export function correctStages(input: StageCorrectionInput): StageCorrectionResul
       .filter((b) => b.enough && b.mode === mode && b.use.kind === "stage" && b.use.valveIds.some((id) => ids.has(id)))
       .sort((a, b) => a.gaugePa - b.gaugePa);
     const applied = own.map((b) =>
-      settled.reduce((sum, s) => sum + (metersIn(mode, s.valve) && valveIsOpen(s.valve, b.gaugePa) ? s.realised : 0), 0),
+      settled.reduce((sum, s) => sum + (sideCounts(mode, s.valve.side) && valveIsOpen(s.valve, b.gaugePa) ? s.realised : 0), 0),
     );
     const appliedBelowM2 = own.length > 0 ? median(applied) : 0;
     const timing = own.length >= 2 ? openingMove(own, band) : null;
