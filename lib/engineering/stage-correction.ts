@@ -108,7 +108,10 @@ export interface StageCorrectionResult {
   /** In the order the stages were given. */
   corrections: StageCorrection[];
   jetAdvice: JetAdvice | null;
-  /** The valves with the areas the corrections leave (drilled), for a new staging model. */
+  /**
+   * The model's valves with the areas the corrections leave (drilled), for a new staging model. Openings stay as
+   * they are: a proposed move is in corrections[].opening, for the tuner to set and read again.
+   */
   valves: PowerValve[];
 }
 
