@@ -223,7 +223,8 @@ function validateModel(model: StagingModel): void {
   }
 }
 
-function sideCounts(mode: ThrottleMode, side: CarburetorSide): boolean {
+/** Whether a side meters in a throttle mode: the primary always, the secondary only at full throttle. */
+export function sideCounts(mode: ThrottleMode, side: CarburetorSide): boolean {
   return mode === "full" || side === "primary";
 }
 
