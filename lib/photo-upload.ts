@@ -33,3 +33,11 @@ export async function storeBlockPhoto(viewer: Viewer, input: { blockId: string; 
 export function thumbnailKeyOf(storageKey: string): string {
   return storageKey.replace(/\.[a-z]+$/, "-thumb.jpg");
 }
+
+const EXTENSIONS: Record<string, string> = { "image/jpeg": "jpg", "image/png": "png", "image/webp": "webp", "image/heic": "heic" };
+
+/** Shown in the browser, never run: a fixed name from the photo's id and its real type. */
+export function photoDisposition(photoId: string, contentType: string, thumbnail: boolean): string {
+  const extension = EXTENSIONS[contentType] ?? "bin";
+  return `inline; filename="photo-${photoId}${thumbnail ? "-thumb" : ""}.${extension}"`;
+}

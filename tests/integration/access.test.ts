@@ -179,7 +179,7 @@ const CASES: AccessCase[] = [
   {
     name: "GET /api/users",
     expected: ADMIN_ONLY(200),
-    call: async () => (await listUsersRoute()).status,
+    call: async () => (await listUsersRoute(new Request("http://127.0.0.1/api/users"))).status,
   },
   {
     name: "POST /api/users",

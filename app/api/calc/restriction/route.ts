@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { apiError, invalidInput, readJson } from "@/lib/api";
+import { apiError, apiRoute } from "@/lib/api";
 import { areaIn2, drillDto, tidy } from "@/lib/calc-dto";
 import { ALL_DRILLS, drillsFromLabels } from "@/lib/engineering/drills";
 import { MAX_HOLES_PER_CHANNEL, solveHoleLayout } from "@/lib/engineering/hole-layout";
@@ -27,12 +27,7 @@ const bodySchema = z
   });
 
 /** Hole layouts (count x drill) for a channel restriction, best first. */
-export async function POST(request: Request) {
-  const json = await readJson(request);
-  if (!json.ok) return json.response;
-  const parsed = bodySchema.safeParse(json.value);
-  if (!parsed.success) return invalidInput(parsed.error);
-  const body = parsed.data;
+export const POST = apiRoute({ roles: "public", body: bodySchema }, async ({ body }) => {
   let drills;
   try {
     drills = body.drills ? drillsFromLabels(body.drills) : ALL_DRILLS;
@@ -60,4 +55,4 @@ export async function POST(request: Request) {
       valveLimited: c.valveLimited,
     })),
   });
-}
+});
