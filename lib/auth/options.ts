@@ -2,6 +2,7 @@ import "server-only";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { z } from "zod";
+import { safeCallbackPath } from "@/lib/http/safe-callback";
 import { SignInRefused, verifyCredentials } from "./credentials";
 
 const credentialsSchema = z.object({
@@ -39,6 +40,10 @@ export const authOptions: NextAuthOptions = {
     }),
   ],
   callbacks: {
+    // The same rule as the sign-in page: only a path on this site, whatever callbackUrl said.
+    redirect({ url, baseUrl }) {
+      return `${baseUrl}${safeCallbackPath(url, baseUrl)}`;
+    },
     // The token only carries the user's id; role and active state are read from the database on
     // every request (lib/auth/session.ts), so a role change or deactivation takes effect at once.
     jwt({ token, user }) {

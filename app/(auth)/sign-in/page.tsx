@@ -1,21 +1,17 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { getSessionUser } from "@/lib/auth/session";
+import { getEnv } from "@/lib/env";
+import { safeCallbackPath } from "@/lib/http/safe-callback";
 import { SafetyNote } from "@/components/ui/safety-note";
 import { SAFETY_CAUTIONS } from "@/lib/safety";
 import { SignInForm } from "./sign-in-form";
 
 export const metadata: Metadata = { title: "Sign in" };
 
-function safeReturnPath(value: string | string[] | undefined): string {
-  const path = Array.isArray(value) ? value[0] : value;
-  // Only same-site paths: never send a user on to another host after signing in.
-  return path && path.startsWith("/") && !path.startsWith("//") ? path : "/";
-}
-
 export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const params = await searchParams;
-  const returnTo = safeReturnPath(params.callbackUrl);
+  const returnTo = safeCallbackPath(params.callbackUrl, getEnv().APP_BASE_URL);
   if (await getSessionUser()) redirect(returnTo);
   return (
     <main className="mx-auto grid min-h-dvh max-w-5xl items-center gap-10 px-6 py-10 md:grid-cols-[1.1fr_1fr]">
