@@ -30,7 +30,6 @@ export function contentSecurityPolicy(options: { nonce?: string; development?: b
     "frame-src 'none'",
     "worker-src 'self' blob:",
     "manifest-src 'self'",
-    ...(development ? [] : ["upgrade-insecure-requests"]),
   ].join("; ");
 }
 
@@ -38,7 +37,7 @@ export function contentSecurityPolicy(options: { nonce?: string; development?: b
 export const BASE_SECURITY_HEADERS: Readonly<Record<string, string>> = {
   "x-frame-options": "DENY",
   "referrer-policy": "strict-origin-when-cross-origin",
-  "permissions-policy": "camera=(self), microphone=(), geolocation=(), payment=(), usb=(), interest-cohort=()",
+  "permissions-policy": "camera=(self), microphone=(), geolocation=(), payment=(), usb=()",
   "x-content-type-options": "nosniff",
   // Browsers ignore HSTS over plain http (the local setup), and keep it once the app is served over https.
   "strict-transport-security": "max-age=63072000; includeSubDomains",
