@@ -5,6 +5,7 @@ import type { z } from "zod";
 import type { UserRole } from "@/db/schema";
 import { checkRole, type SessionUser } from "@/lib/auth/session";
 import { RequestRefusal } from "@/lib/errors";
+import { CONTROL_CHARACTER_MESSAGE, findControlCharacterInForm } from "@/lib/http/control-characters";
 
 /**
  * What every form action returns: Conform's reply plus the HTTP-like status of the outcome, a message for
@@ -16,9 +17,9 @@ export type FormResult<Data = never> = SubmissionResult<string[]> & { httpStatus
 export type WorkOutcome<Data> = string | void | { message?: string; data?: Data };
 
 /**
- * The one wrapper for server actions: parse the form with its zod schema (400 with field errors),
- * load the session (401), check the role (403), then do the work. The work runs its writes in one
- * transaction inside the data layer.
+ * The one wrapper for server actions: load the session (401), check the role (403), then parse the form
+ * with its zod schema (400 with field errors; control characters such as NUL are refused naming the field),
+ * then do the work. The work runs its writes in one transaction inside the data layer.
  *
  * resetForm (default true) clears the form after success, right for forms that create something;
  * calculators pass false so the entered values stay beside their result. A list intent (Conform's
@@ -33,10 +34,16 @@ export async function runFormAction<Schema extends z.ZodType, Data = never>(
     work: (value: z.output<Schema>, user: SessionUser) => Promise<WorkOutcome<Data>>;
   },
 ): Promise<FormResult<Data>> {
-  const submission = parseWithZod(formData, { schema: options.schema });
-  if (submission.status === "error") return { ...submission.reply(), httpStatus: 400 };
+  // Who is asking comes first: an anonymous or wrong-role caller learns nothing about the fields.
   const access = await checkRole(options.roles);
-  if (!access.ok) return { ...submission.reply({ formErrors: [access.message] }), httpStatus: access.status };
+  if (!access.ok) return { status: "error", error: { "": [access.message] }, httpStatus: access.status };
+  const submission = parseWithZod(formData, { schema: options.schema });
+  const controlField = findControlCharacterInForm(formData);
+  if (controlField) {
+    const message = `${controlField} ${CONTROL_CHARACTER_MESSAGE}.`;
+    return { ...submission.reply({ formErrors: [message], fieldErrors: { [controlField]: [message] } }), httpStatus: 400 };
+  }
+  if (submission.status === "error") return { ...submission.reply(), httpStatus: 400 };
   if (submission.status !== "success") return { ...submission.reply(), httpStatus: 200 };
   try {
     const outcome = await options.work(submission.value, access.user);

@@ -1,9 +1,10 @@
 import { z } from "zod";
+import { formText } from "@/lib/form-schema";
 
 const roleSchema = z.enum(["admin", "tuner", "machinist"], { error: "Choose a role: admin, tuner or machinist." });
 
 export const createUserSchema = z.object({
-  name: z.string({ error: "Enter the person's name." }).trim().min(2, { error: "Enter the person's name." }).max(80),
+  name: formText("person's name", { min: 2, max: 80 }),
   email: z.email({ error: "Enter a valid e-mail address." }),
   role: roleSchema,
   password: z
