@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, count, eq, inArray } from "drizzle-orm";
+import { and, asc, count, eq, inArray, sql } from "drizzle-orm";
 import { getDb, type Executor } from "./client";
 import { recordAudit } from "./audit";
 import { users, type UserRole } from "./schema";
@@ -30,7 +30,7 @@ export function normalizeEmail(email: string): string {
 /** For the credentials check only: the one read that returns the hash. */
 export async function getUserCredentials(email: string) {
   const [row] = await getDb()
-    .select({ ...summaryColumns, passwordHash: users.passwordHash })
+    .select({ ...summaryColumns, passwordHash: users.passwordHash, sessionVersion: users.sessionVersion })
     .from(users)
     .where(eq(users.email, normalizeEmail(email)));
   return row;
@@ -42,6 +42,23 @@ export async function getActiveUser(id: string): Promise<UserSummary | undefined
     .from(users)
     .where(and(eq(users.id, id), eq(users.active, true)));
   return row;
+}
+
+/** The active user whose sessions of this version are still valid; undefined once the version was raised. */
+export async function getSessionHolder(id: string, sessionVersion: number): Promise<UserSummary | undefined> {
+  const [row] = await getDb()
+    .select(summaryColumns)
+    .from(users)
+    .where(and(eq(users.id, id), eq(users.active, true), eq(users.sessionVersion, sessionVersion)));
+  return row;
+}
+
+/** Ends every session of the user issued so far (sign out everywhere, new password, reset, deactivation). */
+export async function endSessions(userId: string, db: Executor = getDb()): Promise<void> {
+  await db
+    .update(users)
+    .set({ sessionVersion: sql`${users.sessionVersion} + 1`, updatedAt: new Date() })
+    .where(eq(users.id, userId));
 }
 
 export async function listUsers(): Promise<UserSummary[]> {
@@ -101,7 +118,13 @@ export async function updateUser(input: {
   return getDb().transaction(async (tx) => {
     const [updated] = await tx
       .update(users)
-      .set({ role: input.role, active: input.active, updatedAt: new Date() })
+      .set({
+        role: input.role,
+        active: input.active,
+        // Deactivation ends every session, so reactivating later does not bring old cookies back.
+        ...(input.active === false ? { sessionVersion: sql`${users.sessionVersion} + 1` } : {}),
+        updatedAt: new Date(),
+      })
       .where(eq(users.id, input.userId))
       .returning(summaryColumns);
     if (updated) {
