@@ -80,7 +80,7 @@ export interface RouteSpec<R extends Roles, P, Q, B> {
   /** A JSON body (application/json only, else 415). */
   body?: B;
   /** A multipart body instead (multipart/form-data only, else 415), read within this many bytes (else 413). */
-  multipart?: { maxBytes: number };
+  multipart?: { maxBytes: number; field: string };
 }
 
 export interface RouteInput<R extends Roles, P, Q, B> {
@@ -172,7 +172,10 @@ async function run<R extends Roles, P, Q, B>(
     try {
       form = await readLimitedForm(request, spec.multipart.maxBytes);
     } catch (error) {
-      if (error instanceof BodyTooLarge) throw error;
+      if (error instanceof BodyTooLarge) {
+        const { field } = spec.multipart;
+        return apiError(413, "payload_too_large", `${field}: uploads may be at most ${sizeText(error.limitBytes)}`, { field });
+      }
       return apiError(400, "invalid_input", "(body): the multipart body could not be read", { field: "(body)" });
     }
     const field = findControlCharacterInForm(form);

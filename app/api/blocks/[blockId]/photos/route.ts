@@ -10,12 +10,13 @@ const fieldsSchema = z.object({
   operationId: z.uuid({ error: "operationId must be an operation's id" }).optional(),
 });
 
-// Multipart framing and the operationId field add a little to the photo itself.
+// Multipart framing and the operationId field add a little to the photo itself; a bigger body is cut off
+// while it streams (413), and checkPhoto refuses a photo over MAX_PHOTO_BYTES.
 const MAX_UPLOAD_BYTES = MAX_PHOTO_BYTES + 64 * 1024;
 
 /** Uploads one photo of a block (multipart field `photo`, optional `operationId`). Images only, checked by content. */
 export const POST = apiRoute(
-  { roles: ALL_ROLES, params: idParams("blockId"), multipart: { maxBytes: MAX_UPLOAD_BYTES } },
+  { roles: ALL_ROLES, params: idParams("blockId"), multipart: { maxBytes: MAX_UPLOAD_BYTES, field: "photo" } },
   async ({ user, params, form }) => {
     const file = form!.get("photo");
     if (!(file instanceof File)) return apiError(400, "invalid_input", "photo: choose a photo to upload", { field: "photo" });
