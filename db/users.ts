@@ -1,8 +1,9 @@
 import "server-only";
-import { and, asc, count, eq, inArray, sql } from "drizzle-orm";
+import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { getDb, type Executor } from "./client";
 import { recordAudit } from "./audit";
 import { users, type UserRole } from "./schema";
+import { RequestRefusal } from "@/lib/errors";
 
 /** What the app may know about a user: never the password hash. */
 export interface UserSummary {
@@ -109,6 +110,10 @@ export async function createUser(input: {
   });
 }
 
+/**
+ * Role changes and deactivation. The shop must always keep one active admin: the check and the change run in
+ * one transaction holding the active admins' rows, so two admins demoted at once cannot both succeed.
+ */
 export async function updateUser(input: {
   actorId: string;
   userId: string;
@@ -116,6 +121,17 @@ export async function updateUser(input: {
   active?: boolean;
 }): Promise<UserSummary | undefined> {
   return getDb().transaction(async (tx) => {
+    const admins = await tx
+      .select({ id: users.id })
+      .from(users)
+      .where(and(eq(users.role, "admin"), eq(users.active, true)))
+      .orderBy(asc(users.id))
+      .for("update");
+    const isActiveAdmin = admins.some((admin) => admin.id === input.userId);
+    const losesAdmin = isActiveAdmin && ((input.role !== undefined && input.role !== "admin") || input.active === false);
+    if (losesAdmin && admins.length <= 1) {
+      throw new RequestRefusal(409, "The shop needs at least one active admin.", input.role !== undefined && input.role !== "admin" ? "role" : "active");
+    }
     const [updated] = await tx
       .update(users)
       .set({
@@ -132,14 +148,6 @@ export async function updateUser(input: {
     }
     return updated;
   });
-}
-
-export async function countActiveAdmins(db: Executor = getDb()): Promise<number> {
-  const [row] = await db
-    .select({ n: count() })
-    .from(users)
-    .where(and(eq(users.role, "admin"), eq(users.active, true)));
-  return row?.n ?? 0;
 }
 
 export async function setLengthUnit(userId: string, lengthUnit: "in" | "mm"): Promise<void> {
