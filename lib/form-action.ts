@@ -4,7 +4,9 @@ import { parseWithZod } from "@conform-to/zod/v4";
 import type { z } from "zod";
 import type { UserRole } from "@/db/schema";
 import { checkRole, type SessionUser } from "@/lib/auth/session";
+import { unstable_rethrow } from "next/navigation";
 import { RequestRefusal } from "@/lib/errors";
+import { log } from "@/lib/log";
 import { CONTROL_CHARACTER_MESSAGE, findControlCharacterInForm } from "@/lib/http/control-characters";
 
 /**
@@ -59,6 +61,10 @@ export async function runFormAction<Schema extends z.ZodType, Data = never>(
       const fieldErrors = error.field ? { [error.field]: [error.message] } : {};
       return { ...submission.reply({ formErrors: [error.message], fieldErrors }), httpStatus: error.status };
     }
-    throw error;
+    // redirect() and notFound() are Next's own signals, not failures.
+    unstable_rethrow(error);
+    // Logged here, redacted, rather than by Next, which would print the query's parameters.
+    log.error({ err: error }, "form action failed");
+    return { ...submission.reply({ formErrors: ["Something went wrong on the server."] }), httpStatus: 500 };
   }
 }
