@@ -9,9 +9,9 @@ import { applySecurityHeaders, createNonce, securityHeaders } from "@/lib/http/s
 
 const signInGate = withAuth({ pages: { signIn: "/sign-in" } });
 
-/** Paths anyone may open: sign-in, the API (it answers for itself), Next's assets. */
+/** Paths anyone may open: sign-in, setting a password from a reset link, the API (it answers for itself), Next's assets. */
 function isPublicPath(pathname: string): boolean {
-  return /^\/(sign-in|api\/|_next\/|favicon\.ico|icon\.svg|robots\.txt)/.test(pathname);
+  return /^\/(sign-in|reset-password|api\/|_next\/|favicon\.ico|icon\.svg|robots\.txt)/.test(pathname);
 }
 
 export async function proxy(request: NextRequest, event: NextFetchEvent): Promise<Response> {

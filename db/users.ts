@@ -153,3 +153,19 @@ export async function updateUser(input: {
 export async function setLengthUnit(userId: string, lengthUnit: "in" | "mm"): Promise<void> {
   await getDb().update(users).set({ lengthUnit, updatedAt: new Date() }).where(eq(users.id, userId));
 }
+
+/** For checking the current password before a change: the one other read that returns the hash. */
+export async function getPasswordHash(userId: string): Promise<string | undefined> {
+  const [row] = await getDb().select({ passwordHash: users.passwordHash }).from(users).where(and(eq(users.id, userId), eq(users.active, true)));
+  return row?.passwordHash;
+}
+
+/** Sets a new password hash and ends every session issued with the old one. */
+export async function setPasswordHash(input: { actorId: string | null; userId: string; passwordHash: string; reason: string }, db: Executor = getDb()): Promise<void> {
+  await db
+    .update(users)
+    .set({ passwordHash: input.passwordHash, sessionVersion: sql`${users.sessionVersion} + 1`, updatedAt: new Date() })
+    .where(eq(users.id, input.userId));
+  await recordAudit(db, input.actorId ?? input.userId, "user.password", input.userId, { reason: input.reason });
+}
+

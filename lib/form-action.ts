@@ -27,18 +27,23 @@ export type WorkOutcome<Data> = string | void | { message?: string; data?: Data 
  * calculators pass false so the entered values stay beside their result. A list intent (Conform's
  * add or remove row, submitted without JavaScript) is answered with the changed form and no work.
  */
-export async function runFormAction<Schema extends z.ZodType, Data = never>(
+export async function runFormAction<Schema extends z.ZodType, Data = never, Roles extends readonly UserRole[] | "public" = readonly UserRole[]>(
   formData: FormData,
   options: {
     schema: Schema;
-    roles: readonly UserRole[];
+    /** Who may submit; "public" only for the forms anyone must reach (setting a password from a reset link). */
+    roles: Roles;
     resetForm?: boolean;
-    work: (value: z.output<Schema>, user: SessionUser) => Promise<WorkOutcome<Data>>;
+    work: (value: z.output<Schema>, user: Roles extends "public" ? null : SessionUser) => Promise<WorkOutcome<Data>>;
   },
 ): Promise<FormResult<Data>> {
   // Who is asking comes first: an anonymous or wrong-role caller learns nothing about the fields.
-  const access = await checkRole(options.roles);
-  if (!access.ok) return { status: "error", error: { "": [access.message] }, httpStatus: access.status };
+  let user: SessionUser | null = null;
+  if (options.roles !== "public") {
+    const access = await checkRole(options.roles);
+    if (!access.ok) return { status: "error", error: { "": [access.message] }, httpStatus: access.status };
+    user = access.user;
+  }
   const submission = parseWithZod(formData, { schema: options.schema });
   const controlField = findControlCharacterInForm(formData);
   if (controlField) {
@@ -48,7 +53,7 @@ export async function runFormAction<Schema extends z.ZodType, Data = never>(
   if (submission.status === "error") return { ...submission.reply(), httpStatus: 400 };
   if (submission.status !== "success") return { ...submission.reply(), httpStatus: 200 };
   try {
-    const outcome = await options.work(submission.value, access.user);
+    const outcome = await options.work(submission.value, user as Roles extends "public" ? null : SessionUser);
     const { message, data } = typeof outcome === "object" ? outcome : { message: outcome ?? undefined, data: undefined };
     return {
       ...submission.reply({ resetForm: options.resetForm ?? true }),

@@ -30,6 +30,11 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
       </div>
       <div className="rounded-[var(--radius-sheet)] border-2 border-ink bg-sheet p-8 shadow-[6px_6px_0_var(--color-rule)]">
         <h2 className="mb-6 text-xl font-semibold">Sign in</h2>
+        {params.notice === "password-changed" || params.notice === "signed-out-everywhere" ? (
+          <p role="status" className="mb-4 text-sm text-graphite">
+            {params.notice === "password-changed" ? "Your password is changed: sign in with the new one." : "You are signed out on every device."}
+          </p>
+        ) : null}
         <SignInForm returnTo={returnTo} />
       </div>
     </main>
