@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { formText } from "@/lib/form-schema";
-import { refusePersonalPassword } from "@/lib/password-policy";
+import { newPasswordField, refusePersonalPassword } from "@/lib/password-policy";
 
 const roleSchema = z.enum(["admin", "tuner", "machinist"], { error: "Choose a role: admin, tuner or machinist." });
 
@@ -9,8 +9,9 @@ export const createUserSchema = z
     name: formText("person's name", { min: 2, max: 80 }),
     email: z.email({ error: "Enter a valid e-mail address." }),
     role: roleSchema,
-    password: z.string({ error: "Set a starting password." }),
+    password: newPasswordField,
   })
+  // The e-mail and name checks run once the fields themselves are valid.
   .superRefine((value, ctx) => refusePersonalPassword(value, ctx));
 
 export const updateUserSchema = z
