@@ -190,9 +190,3 @@ async function run<R extends Roles, P, Q, B>(
     form,
   });
 }
-
-/** The request's own data failed a later check: the same 400 shape as a schema refusal. */
-export function fieldRefusal(field: string, message: string) {
-  return apiError(400, "invalid_input", `${field}: ${message}`, { field });
-}
-
