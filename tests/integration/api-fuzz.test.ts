@@ -27,7 +27,7 @@ function bodies(example: unknown) {
 beforeAll(resetDatabase);
 
 describe("generated bodies never break a JSON route", () => {
-  for (const route of STATE_CHANGING_ROUTES.filter((r) => !r.name.includes("photos"))) {
+  for (const route of STATE_CHANGING_ROUTES.filter((r) => r.reads === "json")) {
     it(`${route.name}: ${RUNS} bodies, all answered below 500 with no stack or SQL`, { timeout: 240_000 }, async () => {
       const { path, params } = await route.target();
       await actAs(route.name.includes("users") ? "admin" : "tuner");

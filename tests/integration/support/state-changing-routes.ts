@@ -10,6 +10,9 @@ import { POST as signOff } from "@/app/api/operations/[id]/sign-off/route";
 import { POST as uploadPhoto } from "@/app/api/blocks/[blockId]/photos/route";
 import { POST as orifice } from "@/app/api/calc/orifice/route";
 import { POST as restriction } from "@/app/api/calc/restriction/route";
+import { POST as changePassword } from "@/app/api/account/password/route";
+import { DELETE as endSessions } from "@/app/api/account/sessions/route";
+import { POST as sendReset } from "@/app/api/users/[id]/password-reset/route";
 import { testDb } from "./database";
 import { blockIdOf, jobBody, makeJob } from "./jobs";
 
@@ -17,7 +20,9 @@ export type Handler = (request: Request, context?: { params: Promise<Record<stri
 
 export interface StateChangingRoute {
   name: string;
-  method: "POST" | "PATCH";
+  method: "POST" | "PATCH" | "DELETE";
+  /** What the route reads: a JSON body, a multipart upload, or nothing but the caller. */
+  reads: "json" | "multipart" | "nothing";
   handler: Handler;
   /** The path and params, built on fixtures made by the tuner (call before signing the attacker's victim in). */
   target: () => Promise<{ path: string; params: Record<string, string> }>;
@@ -44,6 +49,7 @@ export const STATE_CHANGING_ROUTES: StateChangingRoute[] = [
   {
     name: "POST /api/users",
     method: "POST",
+    reads: "json",
     handler: createUser,
     target: async () => ({ path: "/api/users", params: {} }),
     body: { name: "Mallory Vance", email: "mallory@blockwright.test", role: "admin", password: "a-long-enough-passphrase-77" },
@@ -51,6 +57,7 @@ export const STATE_CHANGING_ROUTES: StateChangingRoute[] = [
   {
     name: "PATCH /api/users/{id}",
     method: "PATCH",
+    reads: "json",
     handler: patchUser,
     target: async () => {
       const id = await machinistId();
@@ -58,10 +65,11 @@ export const STATE_CHANGING_ROUTES: StateChangingRoute[] = [
     },
     body: { role: "admin" },
   },
-  { name: "POST /api/jobs", method: "POST", handler: createJob, target: async () => ({ path: "/api/jobs", params: {} }), body: jobBody() },
+  { name: "POST /api/jobs", method: "POST", reads: "json", handler: createJob, target: async () => ({ path: "/api/jobs", params: {} }), body: jobBody() },
   {
     name: "PATCH /api/jobs/{id}",
     method: "PATCH",
+    reads: "json",
     handler: patchJob,
     target: async () => {
       const { id } = await releasedJob();
@@ -72,6 +80,7 @@ export const STATE_CHANGING_ROUTES: StateChangingRoute[] = [
   {
     name: "POST /api/jobs/{id}/state",
     method: "POST",
+    reads: "json",
     handler: moveJob,
     target: async () => {
       const { id } = await makeJob("planned");
@@ -82,6 +91,7 @@ export const STATE_CHANGING_ROUTES: StateChangingRoute[] = [
   {
     name: "POST /api/operations/{id}/sign-off",
     method: "POST",
+    reads: "json",
     handler: signOff,
     target: async () => {
       const id = await finishOperation((await releasedJob()).id);
@@ -92,6 +102,7 @@ export const STATE_CHANGING_ROUTES: StateChangingRoute[] = [
   {
     name: "POST /api/blocks/{blockId}/photos",
     method: "POST",
+    reads: "multipart",
     handler: uploadPhoto,
     target: async () => {
       const blockId = await blockIdOf((await releasedJob()).id);
@@ -102,6 +113,7 @@ export const STATE_CHANGING_ROUTES: StateChangingRoute[] = [
   {
     name: "POST /api/calc/orifice",
     method: "POST",
+    reads: "json",
     handler: orifice,
     target: async () => ({ path: "/api/calc/orifice", params: {} }),
     body: { flow: { value: 100, unit: "lb/h" }, dP: { value: 5, unit: "psi" }, cd: 0.7, fuel: "gasoline" },
@@ -109,9 +121,37 @@ export const STATE_CHANGING_ROUTES: StateChangingRoute[] = [
   {
     name: "POST /api/calc/restriction",
     method: "POST",
+    reads: "json",
     handler: restriction,
     target: async () => ({ path: "/api/calc/restriction", params: {} }),
     body: { targetAreaIn2: 0.005, maxHoles: 2 },
+  },
+  {
+    name: "POST /api/account/password",
+    method: "POST",
+    reads: "json",
+    handler: changePassword,
+    target: async () => ({ path: "/api/account/password", params: {} }),
+    body: { currentPassword: "not-the-current-one", newPassword: "copper lathe quiet harbor" },
+  },
+  {
+    name: "DELETE /api/account/sessions",
+    method: "DELETE",
+    reads: "nothing",
+    handler: endSessions,
+    target: async () => ({ path: "/api/account/sessions", params: {} }),
+    body: {},
+  },
+  {
+    name: "POST /api/users/{id}/password-reset",
+    method: "POST",
+    reads: "nothing",
+    handler: sendReset,
+    target: async () => {
+      const id = await machinistId();
+      return { path: `/api/users/${id}/password-reset`, params: { id } };
+    },
+    body: {},
   },
 ];
 
