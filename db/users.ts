@@ -37,14 +37,6 @@ export async function getUserCredentials(email: string) {
   return row;
 }
 
-export async function getActiveUser(id: string): Promise<UserSummary | undefined> {
-  const [row] = await getDb()
-    .select(summaryColumns)
-    .from(users)
-    .where(and(eq(users.id, id), eq(users.active, true)));
-  return row;
-}
-
 /** The active user whose sessions of this version are still valid; undefined once the version was raised. */
 export async function getSessionHolder(id: string, sessionVersion: number): Promise<UserSummary | undefined> {
   const [row] = await getDb()
