@@ -5,7 +5,7 @@ import { consumePasswordReset, createPasswordReset, getPasswordResetHolder } fro
 import { endSessions, getPasswordHash, setPasswordHash } from "@/db/users";
 import { getEnv } from "@/lib/env";
 import { RequestRefusal } from "@/lib/errors";
-import { sendMail } from "@/lib/mail";
+import { sendMail, sendMailSafely } from "@/lib/mail";
 import { passwordProblem } from "@/lib/password-policy";
 import type { SessionUser } from "./session";
 import { hashPassword } from "./credentials";
@@ -31,6 +31,21 @@ export async function changeOwnPassword(user: SessionUser, input: { currentPassw
   refuseWeak(input.newPassword, user, "newPassword");
   if (input.newPassword === input.currentPassword) throw new RequestRefusal(400, "Choose a password you have not used here.", "newPassword");
   await setPasswordHash({ actorId: user.id, userId: user.id, passwordHash: await hashPassword(input.newPassword), reason: "changed by the user" });
+  await notifyPasswordChanged(user);
+}
+
+// The person hears of every change, so one they did not make does not go unnoticed.
+async function notifyPasswordChanged(person: { email: string; name: string }): Promise<void> {
+  await sendMailSafely({
+    to: [person.email],
+    subject: "Your Blockwright password was changed",
+    text: [
+      `${person.name},`,
+      "",
+      "The password of your Blockwright account was just changed, and every session of yours was signed out.",
+      "If you did not do this, tell the shop's admin at once: they can send you a link to set a new one.",
+    ].join("\n"),
+  });
 }
 
 /** Ends every session of the person, on every device, this one included. */
@@ -77,4 +92,5 @@ export async function resetPassword(input: { token: string; newPassword: string 
   refuseWeak(input.newPassword, holder, "newPassword");
   const used = await consumePasswordReset({ tokenHash: tokenHash(input.token), passwordHash: await hashPassword(input.newPassword), now });
   if (!used) throw new RequestRefusal(400, "This link has expired or was already used: ask an admin for a new one.", "token");
+  await notifyPasswordChanged(holder);
 }

@@ -63,6 +63,8 @@ describe("changing your own password", () => {
     expect((await listJobs()).status).toBe(401);
     await expect(signIn(DEMO)).rejects.toThrow();
     await expect(signIn(NEW, "10.0.7.2")).resolves.toMatchObject({ role: "tuner" });
+    await waitForMail(1);
+    expect(mail.messages.map((m) => m.subject)).toEqual(["Your Blockwright password was changed"]);
   });
 
   it("through the account page's form, then to sign-in", async () => {
