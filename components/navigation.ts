@@ -46,6 +46,12 @@ export const PLACES: NavLink[] = [
     purpose: "Every message the app sent through the local mail fake, with its text and attachments.",
     roles: ["admin"],
   },
+  {
+    href: "/account",
+    label: "Account",
+    purpose: "Your password, and signing out on every device at once.",
+    roles: ["admin", "tuner", "machinist"],
+  },
 ];
 
 export function navigationFor(role: UserRole): NavLink[] {

@@ -182,6 +182,10 @@ export async function createJob(
 }
 
 async function resolveTuner(db: Executor, actor: Viewer, requested: string | undefined): Promise<string> {
+  // Whoever the request names, only an admin puts a job in another person's name.
+  if (requested && requested !== actor.id && actor.role !== "admin") {
+    throw new RequestRefusal(403, "A tuner opens jobs in their own name; an admin assigns them to others.", "tunerId");
+  }
   if (!requested || requested === actor.id) {
     if (actor.role === "tuner" || actor.role === "admin") return actor.id;
   }

@@ -15,6 +15,11 @@ export const users = pgTable("users", {
   active: boolean("active").notNull().default(true),
   /** Display preference for lengths and areas; values are stored in SI whatever this says. */
   lengthUnit: text("length_unit", { enum: ["in", "mm"] }).notNull().default("in"),
+  /**
+   * Carried in every session token and compared on each request: raising it (sign out everywhere, a new
+   * password, a reset, deactivation) ends every session issued before.
+   */
+  sessionVersion: integer("session_version").notNull().default(1),
   createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
 });
@@ -31,6 +36,23 @@ export const signInAttempts = pgTable(
     at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index("sign_in_attempts_email_at").on(t.email, t.at), index("sign_in_attempts_address_at").on(t.address, t.at)],
+);
+
+/** A password reset an admin sent: only the token's SHA-256 is kept; it works once, until it expires. */
+export const passwordResetTokens = pgTable(
+  "password_reset_tokens",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    tokenHash: text("token_hash").notNull().unique(),
+    createdBy: uuid("created_by").references(() => users.id),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    usedAt: timestamp("used_at", { withTimezone: true }),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("password_reset_tokens_user").on(t.userId)],
 );
 
 /** Who changed what and when: kept for warranty questions and the next visit of the same car. */

@@ -30,7 +30,7 @@ function fuelName(job: Job): string {
  * The job's figures are the revision's snapshot (what was approved), not the job's working inputs.
  * Machinists get travelers only for jobs that reached the shop floor (released or later); tuners and admins
  * get any approved revision. Refuses with 404 when the block, the revision or the block's part in it is
- * missing, 403 when the viewer may not have it.
+ * missing or when the viewer may not have it (a hidden job is not told apart from a missing one).
  */
 export async function getTravelerData(viewer: Viewer, input: { blockId: string; revision?: number | undefined }): Promise<TravelerData> {
   const db = getDb();
@@ -41,7 +41,8 @@ export async function getTravelerData(viewer: Viewer, input: { blockId: string; 
     .where(eq(meteringBlocks.id, input.blockId));
   if (!found) throw new RequestRefusal(404, "No such metering block.", "blockId");
   if (viewer.role === "machinist" && !SHOP_FLOOR_STATES.includes(found.job.state)) {
-    throw new RequestRefusal(403, "The bench gets travelers once the job is released.");
+    // Answered like a block that does not exist: the bench learns nothing about work not yet released.
+    throw new RequestRefusal(404, "No such metering block.", "blockId");
   }
 
   const number = input.revision ?? found.job.currentRevision;

@@ -7,6 +7,8 @@ const envSchema = z.object({
   DATABASE_URL: z.url({ error: "DATABASE_URL must be a postgres:// URL" }),
   NEXTAUTH_SECRET: z.string().min(16, { error: "NEXTAUTH_SECRET must be at least 16 characters" }),
   APP_BASE_URL: z.url().default("http://127.0.0.1:3000"),
+  // How many reverse proxies stand in front and append to X-Forwarded-For; 0 ignores the header (anyone can write it).
+  TRUSTED_PROXY: z.coerce.number().int().min(0, { error: "TRUSTED_PROXY must be 0 or more" }).max(5).default(0),
   SMTP_HOST: z.string().default("127.0.0.1"),
   SMTP_PORT: z.coerce.number().int().positive().default(2525),
   SMTP_USER: z.string().optional(),

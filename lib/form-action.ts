@@ -4,7 +4,10 @@ import { parseWithZod } from "@conform-to/zod/v4";
 import type { z } from "zod";
 import type { UserRole } from "@/db/schema";
 import { checkRole, type SessionUser } from "@/lib/auth/session";
+import { unstable_rethrow } from "next/navigation";
 import { RequestRefusal } from "@/lib/errors";
+import { log } from "@/lib/log";
+import { CONTROL_CHARACTER_MESSAGE, findControlCharacterInForm } from "@/lib/http/control-characters";
 
 /**
  * What every form action returns: Conform's reply plus the HTTP-like status of the outcome, a message for
@@ -16,34 +19,41 @@ export type FormResult<Data = never> = SubmissionResult<string[]> & { httpStatus
 export type WorkOutcome<Data> = string | void | { message?: string; data?: Data };
 
 /**
- * The one wrapper for server actions: load the session (401), check the role (403), then check the form
- * with its zod schema (400 with field errors), then do the work. The work runs its writes in one
- * transaction inside the data layer.
+ * The one wrapper for server actions: load the session (401), check the role (403), then parse the form
+ * with its zod schema (400 with field errors; control characters such as NUL are refused naming the field),
+ * then do the work. The work runs its writes in one transaction inside the data layer.
  *
  * resetForm (default true) clears the form after success, right for forms that create something;
  * calculators pass false so the entered values stay beside their result. A list intent (Conform's
  * add or remove row, submitted without JavaScript) is answered with the changed form and no work.
  */
-export async function runFormAction<Schema extends z.ZodType, Data = never>(
+export async function runFormAction<Schema extends z.ZodType, Data = never, Roles extends readonly UserRole[] | "public" = readonly UserRole[]>(
   formData: FormData,
   options: {
     schema: Schema;
-    roles: readonly UserRole[];
+    /** Who may submit; "public" only for the forms anyone must reach (setting a password from a reset link). */
+    roles: Roles;
     resetForm?: boolean;
-    work: (value: z.output<Schema>, user: SessionUser) => Promise<WorkOutcome<Data>>;
+    work: (value: z.output<Schema>, user: Roles extends "public" ? null : SessionUser) => Promise<WorkOutcome<Data>>;
   },
 ): Promise<FormResult<Data>> {
+  // Who is asking comes first: an anonymous or wrong-role caller learns nothing about the fields.
+  let user: SessionUser | null = null;
+  if (options.roles !== "public") {
+    const access = await checkRole(options.roles);
+    if (!access.ok) return { status: "error", error: { "": [access.message] }, httpStatus: access.status };
+    user = access.user;
+  }
   const submission = parseWithZod(formData, { schema: options.schema });
-  // Who may comes before what was sent (401/403 before 400).
-  const access = await checkRole(options.roles);
-  if (!access.ok) {
-    // Only the refusal: the form's own field errors are not the stranger's business.
-    return { ...submission.reply({ formErrors: [access.message] }), error: { "": [access.message] }, httpStatus: access.status };
+  const controlField = findControlCharacterInForm(formData);
+  if (controlField) {
+    const message = `${controlField} ${CONTROL_CHARACTER_MESSAGE}.`;
+    return { ...submission.reply({ formErrors: [message], fieldErrors: { [controlField]: [message] } }), httpStatus: 400 };
   }
   if (submission.status === "error") return { ...submission.reply(), httpStatus: 400 };
   if (submission.status !== "success") return { ...submission.reply(), httpStatus: 200 };
   try {
-    const outcome = await options.work(submission.value, access.user);
+    const outcome = await options.work(submission.value, user as Roles extends "public" ? null : SessionUser);
     const { message, data } = typeof outcome === "object" ? outcome : { message: outcome ?? undefined, data: undefined };
     return {
       ...submission.reply({ resetForm: options.resetForm ?? true }),
@@ -56,6 +66,10 @@ export async function runFormAction<Schema extends z.ZodType, Data = never>(
       const fieldErrors = error.field ? { [error.field]: [error.message] } : {};
       return { ...submission.reply({ formErrors: [error.message], fieldErrors }), httpStatus: error.status };
     }
-    throw error;
+    // redirect() and notFound() are Next's own signals, not failures.
+    unstable_rethrow(error);
+    // Logged here, redacted, rather than by Next, which would print the query's parameters.
+    log.error({ err: error }, "form action failed");
+    return { ...submission.reply({ formErrors: ["Something went wrong on the server."] }), httpStatus: 500 };
   }
 }

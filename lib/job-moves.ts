@@ -12,6 +12,7 @@ import { getEnv } from "./env";
 import type { JobState } from "./job-states";
 import { sendMailSafely } from "./mail";
 import { ALL_CAUTIONS } from "./safety";
+import { log } from "@/lib/log";
 
 /**
  * Moves a job to another state (the one way pages and the API do it) and sends what the move calls for:
@@ -46,7 +47,7 @@ export async function sendReleaseNotice(actor: Viewer, jobId: string, revision: 
       });
       lines.push(`  ${block.side} block: ${benchUrl(block.id, revision)}`);
     } catch (error) {
-      console.error("[release] traveler for", block.side, error);
+      log.error({ err: error, side: block.side }, "release: traveler not attached");
     }
   }
   return sendMailSafely({

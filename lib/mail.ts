@@ -2,6 +2,7 @@ import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
 import type Mail from "nodemailer/lib/mailer";
 import { getEnv } from "./env";
+import { log } from "./log";
 
 // Outgoing mail through nodemailer: the local SMTP fake in development and tests, any SMTP server in
 // production (SMTP_HOST, SMTP_PORT, SMTP_USER, SMTP_PASSWORD).
@@ -40,7 +41,7 @@ export async function sendMailSafely(message: Message): Promise<boolean> {
     await sendMail(message);
     return true;
   } catch (error) {
-    console.error("[mail] could not send", message.subject, error);
+    log.error({ err: error, subject: message.subject }, "mail not sent");
     return false;
   }
 }

@@ -6,7 +6,7 @@ import { checkPhoto } from "./photos";
 import { deleteObject, putObject } from "./storage";
 
 /**
- * Stores a checked photo and its thumbnail, then records them. If recording fails the stored objects are
+ * Stores a checked photo (upright, without metadata) and its thumbnail, then records them. If recording fails the stored objects are
  * removed again, so a refused or failed upload leaves nothing behind.
  */
 export async function storeBlockPhoto(viewer: Viewer, input: { blockId: string; operationId?: string; bytes: Buffer }) {
@@ -14,7 +14,7 @@ export async function storeBlockPhoto(viewer: Viewer, input: { blockId: string; 
   const base = `blocks/${input.blockId}/${randomUUID()}`;
   const storageKey = `${base}.${photo.extension}`;
   const thumbnailKey = `${base}-thumb.jpg`;
-  await putObject(storageKey, input.bytes, photo.contentType);
+  await putObject(storageKey, photo.bytes, photo.contentType);
   try {
     await putObject(thumbnailKey, photo.thumbnail, "image/jpeg");
     return await insertAttachment(viewer, {
@@ -22,7 +22,7 @@ export async function storeBlockPhoto(viewer: Viewer, input: { blockId: string; 
       operationId: input.operationId,
       storageKey,
       contentType: photo.contentType,
-      byteSize: input.bytes.length,
+      byteSize: photo.bytes.length,
     });
   } catch (error) {
     await Promise.allSettled([deleteObject(storageKey), deleteObject(thumbnailKey)]);
@@ -32,4 +32,12 @@ export async function storeBlockPhoto(viewer: Viewer, input: { blockId: string; 
 
 export function thumbnailKeyOf(storageKey: string): string {
   return storageKey.replace(/\.[a-z]+$/, "-thumb.jpg");
+}
+
+const EXTENSIONS: Record<string, string> = { "image/jpeg": "jpg", "image/png": "png", "image/webp": "webp" };
+
+/** Shown in the browser, never run: a fixed name from the photo's id and its real type. */
+export function photoDisposition(photoId: string, contentType: string, thumbnail: boolean): string {
+  const extension = EXTENSIONS[contentType] ?? "bin";
+  return `inline; filename="photo-${photoId}${thumbnail ? "-thumb" : ""}.${extension}"`;
 }

@@ -1,13 +1,17 @@
 import "server-only";
 import sharp, { type Metadata } from "sharp";
 import { RequestRefusal } from "./errors";
+// Phones hand a browser JPEG (an iPhone converts its HEIC on the way); each format is stored and served as itself.
+import { PHOTO_FORMATS, type PhotoFormat } from "./photo-formats";
 
 /** The largest photo the bench accepts. A phone photo is typically 2-6 MB. */
 export const MAX_PHOTO_BYTES = 12 * 1024 * 1024;
-export const PHOTO_FORMATS = { jpeg: "image/jpeg", png: "image/png", webp: "image/webp", heif: "image/heic" } as const;
 const THUMBNAIL_PX = 320;
+const NOT_A_PHOTO = "The file is not a photo (JPEG, PNG or WebP).";
 
 export interface CheckedPhoto {
+  /** The photo as stored: turned upright and re-encoded without its metadata (EXIF, GPS, XMP, comments). */
+  bytes: Buffer;
   contentType: string;
   extension: string;
   width: number;
@@ -15,30 +19,44 @@ export interface CheckedPhoto {
   thumbnail: Buffer;
 }
 
+function isPhotoFormat(format: string | undefined): format is PhotoFormat {
+  return format !== undefined && Object.hasOwn(PHOTO_FORMATS, format);
+}
+
 /**
- * Accepts a photo only when its bytes decode as JPEG, PNG, WebP or HEIC, whatever its name or declared type
- * says, and makes its thumbnail. Refusals name the `photo` field.
+ * Accepts a photo only when its bytes decode as JPEG, PNG or WebP, whatever its name or declared type says.
+ * The stored copy is re-encoded with the camera's orientation applied and every metadata block dropped, so a
+ * phone's GPS position never reaches storage. Refusals name the `photo` field.
  */
-export async function checkPhoto(bytes: Buffer): Promise<CheckedPhoto> {
-  if (bytes.length === 0) throw new RequestRefusal(400, "The file is empty.", "photo");
-  if (bytes.length > MAX_PHOTO_BYTES) {
+export async function checkPhoto(input: Buffer): Promise<CheckedPhoto> {
+  if (input.length === 0) throw new RequestRefusal(400, "The file is empty.", "photo");
+  if (input.length > MAX_PHOTO_BYTES) {
     throw new RequestRefusal(400, `Photos may be at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB.`, "photo");
   }
   let metadata: Metadata;
   try {
-    metadata = await sharp(bytes).metadata();
+    metadata = await sharp(input).metadata();
   } catch {
-    throw new RequestRefusal(400, "The file is not a photo (JPEG, PNG, WebP or HEIC).", "photo");
+    throw new RequestRefusal(400, NOT_A_PHOTO, "photo");
   }
-  const format = metadata.format as keyof typeof PHOTO_FORMATS | undefined;
-  if (!format || !(format in PHOTO_FORMATS) || !metadata.width || !metadata.height) {
-    throw new RequestRefusal(400, "The file is not a photo (JPEG, PNG, WebP or HEIC).", "photo");
-  }
-  let thumbnail: Buffer;
+  const format = metadata.format;
+  if (!isPhotoFormat(format) || !metadata.width || !metadata.height) throw new RequestRefusal(400, NOT_A_PHOTO, "photo");
   try {
-    thumbnail = await sharp(bytes).rotate().resize(THUMBNAIL_PX, THUMBNAIL_PX, { fit: "inside" }).jpeg({ quality: 78 }).toBuffer();
+    // rotate() with no angle applies the EXIF orientation; sharp writes no metadata unless asked to.
+    const upright = sharp(input, { limitInputPixels: 100_000_000 }).rotate();
+    const encoded =
+      format === "jpeg" ? upright.jpeg({ quality: 90 }) : format === "png" ? upright.png() : upright.webp({ quality: 90 });
+    const { data, info } = await encoded.toBuffer({ resolveWithObject: true });
+    const thumbnail = await sharp(data).resize(THUMBNAIL_PX, THUMBNAIL_PX, { fit: "inside" }).jpeg({ quality: 78 }).toBuffer();
+    return {
+      bytes: data,
+      contentType: PHOTO_FORMATS[format],
+      extension: format === "jpeg" ? "jpg" : format,
+      width: info.width,
+      height: info.height,
+      thumbnail,
+    };
   } catch {
     throw new RequestRefusal(400, "The photo could not be read: it may be damaged.", "photo");
   }
-  return { contentType: PHOTO_FORMATS[format], extension: format === "jpeg" ? "jpg" : format, width: metadata.width, height: metadata.height, thumbnail };
 }

@@ -6,3 +6,8 @@ export function parseIdParam(id: string, name = "id"): { ok: true; id: string } 
   if (parsed.success) return { ok: true, id: parsed.data };
   return { ok: false, error: new z.ZodError(parsed.error.issues.map((issue) => ({ ...issue, path: [name] }))) };
 }
+
+/** The zod shape of a route's id segments, e.g. idParams("blockId"): each must be a uuid, named in the error. */
+export function idParams<const N extends string>(...names: N[]) {
+  return z.object(Object.fromEntries(names.map((name) => [name, z.uuid({ error: `${name} must be an id` })])) as Record<N, z.ZodUUID>);
+}

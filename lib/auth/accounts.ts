@@ -1,5 +1,5 @@
 import "server-only";
-import { countActiveAdmins, createUser, DuplicateEmailError, getActiveUser, updateUser, type UserSummary } from "@/db/users";
+import { createUser, DuplicateEmailError, updateUser, type UserSummary } from "@/db/users";
 import type { UserRole } from "@/db/schema";
 import { RequestRefusal } from "@/lib/errors";
 import { hashPassword } from "./credentials";
@@ -16,16 +16,11 @@ export async function createAccount(
   }
 }
 
-/** Role changes and deactivation; the shop must always keep one active admin. */
+/** Role changes and deactivation; the data layer keeps one active admin (in the same transaction). */
 export async function changeAccount(
   actorId: string,
   input: { userId: string; role?: UserRole; active?: boolean },
 ): Promise<UserSummary> {
-  const target = await getActiveUser(input.userId);
-  const losesAdmin = target?.role === "admin" && ((input.role && input.role !== "admin") || input.active === false);
-  if (losesAdmin && (await countActiveAdmins()) <= 1) {
-    throw new RequestRefusal(409, "The shop needs at least one active admin.", input.role ? "role" : "active");
-  }
   const updated = await updateUser({ actorId, ...input });
   if (!updated) throw new RequestRefusal(404, "No such user.", "userId");
   return updated;

@@ -2,6 +2,10 @@ import "server-only";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { z } from "zod";
+import { endSessions } from "@/db/users";
+import { safeCallbackPath } from "@/lib/http/safe-callback";
+import { getEnv } from "@/lib/env";
+import { clientAddress } from "./client-address";
 import { SignInRefused, verifyCredentials } from "./credentials";
 
 const credentialsSchema = z.object({
@@ -11,13 +15,6 @@ const credentialsSchema = z.object({
 
 // A machinist's session should outlast a shift at the bench.
 const SESSION_HOURS = 14;
-
-function clientAddress(headers: Record<string, unknown> | undefined): string {
-  const forwarded = headers?.["x-forwarded-for"];
-  const first = typeof forwarded === "string" ? forwarded.split(",")[0]?.trim() : undefined;
-  const real = headers?.["x-real-ip"];
-  return first || (typeof real === "string" ? real : "") || "unknown";
-}
 
 export const authOptions: NextAuthOptions = {
   session: { strategy: "jwt", maxAge: SESSION_HOURS * 60 * 60 },
@@ -30,7 +27,7 @@ export const authOptions: NextAuthOptions = {
         const parsed = credentialsSchema.safeParse(raw);
         if (!parsed.success) throw new Error("Enter an e-mail address and a password.");
         try {
-          return await verifyCredentials({ ...parsed.data, address: clientAddress(req?.headers) });
+          return await verifyCredentials({ ...parsed.data, address: clientAddress(req?.headers, getEnv().TRUSTED_PROXY) });
         } catch (error) {
           if (error instanceof SignInRefused) throw new Error(error.message);
           throw error;
@@ -38,15 +35,30 @@ export const authOptions: NextAuthOptions = {
       },
     }),
   ],
+  events: {
+    // Signing out ends the session everywhere: the cookie a browser may have kept (or someone copied) stops
+    // working at once instead of at its expiry.
+    async signOut({ token }) {
+      if (token?.sub) await endSessions(token.sub);
+    },
+  },
   callbacks: {
-    // The token only carries the user's id; role and active state are read from the database on
-    // every request (lib/auth/session.ts), so a role change or deactivation takes effect at once.
+    // The same rule as the sign-in page: only a path on this site, whatever callbackUrl said.
+    redirect({ url, baseUrl }) {
+      return `${baseUrl}${safeCallbackPath(url, baseUrl)}`;
+    },
+    // The token only carries the user's id and session version; role, active state and the current version
+    // are read from the database on every request (lib/auth/session.ts), so a role change, deactivation or
+    // sign-out everywhere takes effect at once.
     jwt({ token, user }) {
-      if (user) token.sub = user.id;
+      if (user) {
+        token.sub = user.id;
+        token.sv = (user as { sessionVersion?: number }).sessionVersion;
+      }
       return token;
     },
     session({ session, token }) {
-      return { ...session, userId: token.sub };
+      return { ...session, userId: token.sub, sessionVersion: token.sv };
     },
   },
 };

@@ -1,18 +1,22 @@
 import "server-only";
 import { getServerSession } from "next-auth";
 import { forbidden, redirect } from "next/navigation";
-import { getActiveUser, type UserSummary } from "@/db/users";
+import { getSessionHolder, type UserSummary } from "@/db/users";
 import type { UserRole } from "@/db/schema";
 import { authOptions } from "./options";
 
 export type SessionUser = UserSummary;
 
-/** The signed-in, still active user, or null. Role comes from the database, not from the cookie. */
+/**
+ * The signed-in, still active user, or null. Role comes from the database, not from the cookie; the cookie's
+ * session version must still be the user's (sign-out everywhere, a password change and deactivation raise it).
+ */
 export async function getSessionUser(): Promise<SessionUser | null> {
-  const session = await getServerSession(authOptions);
-  const userId = (session as { userId?: string } | null)?.userId;
-  if (!userId) return null;
-  return (await getActiveUser(userId)) ?? null;
+  const session = (await getServerSession(authOptions)) as { userId?: string; sessionVersion?: number } | null;
+  const userId = session?.userId;
+  // A token without a version predates session versions, or was forged without one: not a session.
+  if (!userId || typeof session.sessionVersion !== "number") return null;
+  return (await getSessionHolder(userId, session.sessionVersion)) ?? null;
 }
 
 export type AccessCheck =

@@ -3,7 +3,11 @@
 import { beforeEach, describe, expect, it } from "vitest";
 import { GET as listUsersRoute, POST as createUserRoute } from "@/app/api/users/route";
 import { PATCH as patchUserRoute } from "@/app/api/users/[id]/route";
-import { createUserAction, updateUserAction } from "@/app/(office)/shop/users/actions";
+import { createUserAction, sendResetLinkAction, updateUserAction } from "@/app/(office)/shop/users/actions";
+import { changePasswordAction, signOutEverywhereAction } from "@/app/(office)/account/actions";
+import { POST as changePasswordRoute } from "@/app/api/account/password/route";
+import { DELETE as endSessionsRoute } from "@/app/api/account/sessions/route";
+import { POST as sendResetRoute } from "@/app/api/users/[id]/password-reset/route";
 import { createJobAction } from "@/app/(office)/jobs/new/actions";
 import { createCustomerAction, updateCustomerAction } from "@/app/(office)/shop/customers/actions";
 import { saveShopLimitsAction, setDrillStockedAction, setDrillSystemStockedAction } from "@/app/(office)/shop/drills/actions";
@@ -68,6 +72,45 @@ const inch = (value: number) => ({ value, unit: "in" });
 const ADMIN_ONLY = (ok: number): Record<Actor, number> => ({ anonymous: 401, machinist: 403, tuner: 403, admin: ok });
 
 const CASES: AccessCase[] = [
+  {
+    name: "POST /api/account/password",
+    expected: EVERYONE(204),
+    call: async () =>
+      (await changePasswordRoute(jsonRequest("/api/account/password", "POST", { currentPassword: "blockwright-demo", newPassword: "copper lathe quiet harbor" }))).status,
+  },
+  {
+    name: "DELETE /api/account/sessions",
+    expected: EVERYONE(204),
+    call: async () => (await endSessionsRoute(new Request("http://127.0.0.1/api/account/sessions", { method: "DELETE" }))).status,
+  },
+  {
+    name: "POST /api/users/{id}/password-reset (unknown user)",
+    expected: ADMIN_ONLY(404),
+    call: async () => {
+      const id = "00000000-0000-4000-8000-000000000000";
+      return (await sendResetRoute(new Request(`http://127.0.0.1/api/users/${id}/password-reset`, { method: "POST" }), jobParams(id))).status;
+    },
+  },
+  {
+    name: "action sendResetLinkAction (unknown user)",
+    expected: ADMIN_ONLY(404),
+    call: async () => (await sendResetLinkAction(undefined, formData({ userId: "00000000-0000-4000-8000-000000000000" }))).httpStatus,
+  },
+  {
+    name: "action changePasswordAction (wrong current password)",
+    expected: EVERYONE(400),
+    call: async () =>
+      (await changePasswordAction(undefined, formData({ currentPassword: "not-the-password", newPassword: "copper lathe quiet harbor", confirmPassword: "copper lathe quiet harbor" })))
+        .httpStatus,
+  },
+  {
+    name: "action signOutEverywhereAction",
+    expected: { anonymous: 401, machinist: 303, tuner: 303, admin: 303 },
+    call: async () => {
+      const outcome = await settle(signOutEverywhereAction(undefined, formData({})));
+      return outcome.redirectTo ? 303 : outcome.result!.httpStatus;
+    },
+  },
   {
     name: "POST /api/operations/{id}/sign-off (released job)",
     expected: EVERYONE(201),
@@ -193,14 +236,14 @@ const CASES: AccessCase[] = [
   },
   {
     name: "GET /api/blocks/{id}/traveler (planned: not yet on the shop floor)",
-    expected: OFFICE_ONLY(200),
+    expected: { anonymous: 401, machinist: 404, tuner: 200, admin: 200 },
     setup: async () => blockIdOf((await makeJob("planned")).id),
     call: async (blockId) => (await travelerRoute(new Request(`http://127.0.0.1/api/blocks/${blockId}/traveler`), { params: Promise.resolve({ blockId }) })).status,
   },
   {
     name: "GET /api/users",
     expected: ADMIN_ONLY(200),
-    call: async () => (await listUsersRoute()).status,
+    call: async () => (await listUsersRoute(new Request("http://127.0.0.1/api/users"))).status,
   },
   {
     name: "POST /api/users",
@@ -208,7 +251,7 @@ const CASES: AccessCase[] = [
     call: async () =>
       (
         await createUserRoute(
-          jsonRequest("/api/users", "POST", { name: "Sol Brandt", email: "sol@blockwright.test", role: "tuner", password: "long-enough-pw" }),
+          jsonRequest("/api/users", "POST", { name: "Sol Brandt", email: "sol@blockwright.test", role: "tuner", password: "quiet-lathe-harbor-91" }),
         )
       ).status,
   },
@@ -224,7 +267,7 @@ const CASES: AccessCase[] = [
     name: "action createUserAction",
     expected: ADMIN_ONLY(200),
     call: async () =>
-      (await createUserAction(undefined, formData({ name: "Sol Brandt", email: "sol@blockwright.test", role: "tuner", password: "long-enough-pw" })))
+      (await createUserAction(undefined, formData({ name: "Sol Brandt", email: "sol@blockwright.test", role: "tuner", password: "quiet-lathe-harbor-91" })))
         .httpStatus,
   },
   {

@@ -196,10 +196,13 @@ describe("GET /api/blocks/{id}/traveler", () => {
     expect((await getTraveler(draftBlockId)).status).toBe(404);
   });
 
-  it("keeps a planned (unreleased) job's traveler from the bench: 403 for a machinist, marked not released for the office", async () => {
+  it("keeps a planned (unreleased) job's traveler from the bench: 404 for a machinist, as for a block that does not exist, marked not released for the office", async () => {
     const blockId = await blockIdOf((await makeJob("planned")).id);
     await actAs("machinist");
-    expect((await getTraveler(blockId)).status).toBe(403);
+    const hidden = await getTraveler(blockId);
+    expect(hidden.status).toBe(404);
+    const missing = await getTraveler("00000000-0000-4000-8000-000000000000");
+    expect(await hidden.json()).toEqual(await missing.json());
     await actAs("tuner");
     const response = await getTraveler(blockId);
     expect(response.status).toBe(200);

@@ -1,11 +1,12 @@
 import { beforeEach, describe, expect, it } from "vitest";
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { POST as createUserRoute } from "@/app/api/users/route";
 import { PATCH as patchUserRoute } from "@/app/api/users/[id]/route";
 import { createUserAction, updateUserAction } from "@/app/(office)/shop/users/actions";
 import { verifyCredentials, INVALID_MESSAGE, THROTTLED_MESSAGE } from "@/lib/auth/credentials";
 import { getSessionUser } from "@/lib/auth/session";
-import { MAX_FAILURES_PER_ACCOUNT, MAX_FAILURES_PER_ADDRESS } from "@/lib/auth/throttle";
+import { ACCOUNT_RULE, ADDRESS_RULE, PAIR_RULE, signInWaitSeconds } from "@/lib/auth/throttle";
+import { UNKNOWN_ADDRESS } from "@/lib/auth/client-address";
 import * as schema from "@/db/schema";
 import { actAs, formData, jsonRequest, resetDatabase, testDb } from "./support/database";
 
@@ -31,30 +32,60 @@ describe("signing in", () => {
     ).rejects.toThrow(INVALID_MESSAGE);
   });
 
-  it("throttles an account after repeated bad passwords, even when the right one follows", async () => {
-    for (let i = 0; i < MAX_FAILURES_PER_ACCOUNT; i++) {
-      await expect(
-        verifyCredentials({ email: "tuner@blockwright.test", password: `guess-${i}`, address: `10.0.1.${i}` }),
-      ).rejects.toThrow(INVALID_MESSAGE);
+  it("slows the address guessing an account, while the owner elsewhere signs in", async () => {
+    for (let i = 0; i < PAIR_RULE.free; i++) {
+      await expect(verifyCredentials({ email: "tuner@blockwright.test", password: `guess-${i}`, address: "10.0.1.7" })).rejects.toThrow(INVALID_MESSAGE);
     }
-    await expect(
-      verifyCredentials({ email: "tuner@blockwright.test", password: DEMO_PASSWORD, address: "10.0.1.99" }),
-    ).rejects.toThrow(THROTTLED_MESSAGE);
-    // Another account is not affected.
-    await expect(verifyCredentials({ email: "admin@blockwright.test", password: DEMO_PASSWORD, address: "10.0.1.99" })).resolves.toMatchObject({
-      role: "admin",
-    });
+    // The guesser must now wait, even with the right password.
+    await expect(verifyCredentials({ email: "tuner@blockwright.test", password: DEMO_PASSWORD, address: "10.0.1.7" })).rejects.toThrow(THROTTLED_MESSAGE);
+    // The owner, from their own address, is not locked out.
+    await expect(verifyCredentials({ email: "tuner@blockwright.test", password: DEMO_PASSWORD, address: "10.0.1.99" })).resolves.toMatchObject({ role: "tuner" });
   });
 
-  it("throttles an address that guesses across many accounts", async () => {
-    for (let i = 0; i < MAX_FAILURES_PER_ADDRESS; i++) {
-      await expect(
-        verifyCredentials({ email: `nobody-${i}@blockwright.test`, password: "x", address: "10.9.9.9" }),
-      ).rejects.toThrow(INVALID_MESSAGE);
+  it("guessing from many addresses keeps the owner waiting seconds, never locked out", async () => {
+    for (let i = 0; i < ACCOUNT_RULE.free + 5; i++) {
+      await testDb.insert(schema.signInAttempts).values({ email: "tuner@blockwright.test", address: `10.0.2.${i}`, succeeded: false });
     }
-    await expect(verifyCredentials({ email: "admin@blockwright.test", password: DEMO_PASSWORD, address: "10.9.9.9" })).rejects.toThrow(
-      THROTTLED_MESSAGE,
-    );
+    await expect(verifyCredentials({ email: "tuner@blockwright.test", password: DEMO_PASSWORD, address: "10.0.3.1" })).rejects.toThrow(THROTTLED_MESSAGE);
+    const wait = await signInWaitSeconds("tuner@blockwright.test", "10.0.3.1");
+    expect(wait).toBeGreaterThan(0);
+    expect(wait).toBeLessThanOrEqual(ACCOUNT_RULE.capSeconds);
+    expect(await signInWaitSeconds("tuner@blockwright.test", "10.0.3.1", new Date(Date.now() + (ACCOUNT_RULE.capSeconds + 1) * 1000))).toBe(0);
+  });
+
+  it("slows an address that guesses across many accounts, not other addresses", async () => {
+    for (let i = 0; i < ADDRESS_RULE.free; i++) {
+      await expect(verifyCredentials({ email: `nobody-${i}@blockwright.test`, password: "x", address: "10.9.9.9" })).rejects.toThrow(INVALID_MESSAGE);
+    }
+    await expect(verifyCredentials({ email: "admin@blockwright.test", password: DEMO_PASSWORD, address: "10.9.9.9" })).rejects.toThrow(THROTTLED_MESSAGE);
+    await expect(verifyCredentials({ email: "admin@blockwright.test", password: DEMO_PASSWORD, address: "10.9.9.10" })).resolves.toMatchObject({ role: "admin" });
+  });
+
+  it("without a trusted proxy every caller shares the unknown address, so only the account is slowed, and gently", async () => {
+    for (let i = 0; i < PAIR_RULE.free + 2; i++) {
+      await expect(verifyCredentials({ email: "tuner@blockwright.test", password: `guess-${i}`, address: UNKNOWN_ADDRESS })).rejects.toThrow(INVALID_MESSAGE);
+    }
+    await expect(verifyCredentials({ email: "tuner@blockwright.test", password: DEMO_PASSWORD, address: UNKNOWN_ADDRESS })).resolves.toMatchObject({ role: "tuner" });
+  });
+
+  it("an unknown e-mail costs the same time as a known one (medians of 20 within 25 %)", async () => {
+    const time = async (email: string) => {
+      await testDb.delete(schema.signInAttempts).where(sql`true`);
+      const started = performance.now();
+      await verifyCredentials({ email, password: "wrong-password-123", address: "10.0.4.1" }).catch(() => undefined);
+      return performance.now() - started;
+    };
+    await time("tuner@blockwright.test"); // warm both paths: the unknown-account hash is made once
+    await time("nobody@blockwright.test");
+    const known: number[] = [];
+    const unknown: number[] = [];
+    for (let i = 0; i < 20; i++) {
+      known.push(await time("tuner@blockwright.test"));
+      unknown.push(await time(`nobody-${i}@blockwright.test`));
+    }
+    const median = (values: number[]) => [...values].sort((a, b) => a - b)[10]!;
+    const [k, u] = [median(known), median(unknown)];
+    expect(Math.abs(k - u) / Math.max(k, u)).toBeLessThan(0.25);
   });
 
   it("ends an active session once the user is deactivated", async () => {

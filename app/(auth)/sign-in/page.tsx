@@ -1,21 +1,17 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { getSessionUser } from "@/lib/auth/session";
+import { getEnv } from "@/lib/env";
+import { safeCallbackPath } from "@/lib/http/safe-callback";
 import { SafetyNote } from "@/components/ui/safety-note";
 import { SAFETY_CAUTIONS } from "@/lib/safety";
 import { SignInForm } from "./sign-in-form";
 
 export const metadata: Metadata = { title: "Sign in" };
 
-function safeReturnPath(value: string | string[] | undefined): string {
-  const path = Array.isArray(value) ? value[0] : value;
-  // Only same-site paths: never send a user on to another host after signing in.
-  return path && path.startsWith("/") && !path.startsWith("//") ? path : "/";
-}
-
 export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const params = await searchParams;
-  const returnTo = safeReturnPath(params.callbackUrl);
+  const returnTo = safeCallbackPath(params.callbackUrl, getEnv().APP_BASE_URL);
   if (await getSessionUser()) redirect(returnTo);
   return (
     <main className="mx-auto grid min-h-dvh max-w-5xl items-center gap-10 px-6 py-10 md:grid-cols-[1.1fr_1fr]">
@@ -34,6 +30,11 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
       </div>
       <div className="rounded-[var(--radius-sheet)] border-2 border-ink bg-sheet p-8 shadow-[6px_6px_0_var(--color-rule)]">
         <h2 className="mb-6 text-xl font-semibold">Sign in</h2>
+        {params.notice === "password-changed" || params.notice === "signed-out-everywhere" ? (
+          <p role="status" className="mb-4 text-sm text-graphite">
+            {params.notice === "password-changed" ? "Your password is changed: sign in with the new one." : "You are signed out on every device."}
+          </p>
+        ) : null}
         <SignInForm returnTo={returnTo} />
       </div>
     </main>

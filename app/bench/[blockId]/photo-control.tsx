@@ -2,6 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useId, useState, type ChangeEvent } from "react";
+import { PHOTO_ACCEPT } from "@/lib/photo-formats";
 
 type Upload = { state: "idle" } | { state: "sending"; percent: number } | { state: "failed"; message: string };
 
@@ -83,7 +84,7 @@ export function PhotoControl({
       <input
         id={inputId}
         type="file"
-        accept="image/*"
+        accept={PHOTO_ACCEPT}
         capture="environment"
         disabled={sending}
         onChange={send}

@@ -30,8 +30,11 @@ export async function actAs(actor: Actor): Promise<string | null> {
     return null;
   }
   const email = DEMO_USERS.find((user) => user.role === actor)!.email;
-  const [row] = await testDb.select({ id: schema.users.id }).from(schema.users).where(sql`${schema.users.email} = ${email}`);
-  setSessionUserId(row!.id);
+  const [row] = await testDb
+    .select({ id: schema.users.id, sessionVersion: schema.users.sessionVersion })
+    .from(schema.users)
+    .where(sql`${schema.users.email} = ${email}`);
+  setSessionUserId(row!.id, row!.sessionVersion);
   return row!.id;
 }
 

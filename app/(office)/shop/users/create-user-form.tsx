@@ -38,7 +38,7 @@ export function CreateUserForm() {
         htmlFor={fields.password.id}
         errors={fields.password.errors}
         errorId={fields.password.errorId}
-        hint="At least 10 characters. Hand it over in person."
+        hint="At least 12 characters, not the e-mail or the name. Hand it over in person, or send a reset link once the user exists."
       >
         <Input {...getInputProps(fields.password, { type: "password" })} key={fields.password.key} autoComplete="new-password" />
       </Field>

@@ -1,16 +1,18 @@
 import { z } from "zod";
+import { formText } from "@/lib/form-schema";
+import { newPasswordField, refusePersonalPassword } from "@/lib/password-policy";
 
 const roleSchema = z.enum(["admin", "tuner", "machinist"], { error: "Choose a role: admin, tuner or machinist." });
 
-export const createUserSchema = z.object({
-  name: z.string({ error: "Enter the person's name." }).trim().min(2, { error: "Enter the person's name." }).max(80),
-  email: z.email({ error: "Enter a valid e-mail address." }),
-  role: roleSchema,
-  password: z
-    .string({ error: "Set a starting password of at least 10 characters." })
-    .min(10, { error: "Set a starting password of at least 10 characters." })
-    .max(200),
-});
+export const createUserSchema = z
+  .object({
+    name: formText("person's name", { min: 2, max: 80 }),
+    email: z.email({ error: "Enter a valid e-mail address." }),
+    role: roleSchema,
+    password: newPasswordField,
+  })
+  // The e-mail and name checks run once the fields themselves are valid.
+  .superRefine((value, ctx) => refusePersonalPassword(value, ctx));
 
 export const updateUserSchema = z
   .object({
@@ -19,3 +21,5 @@ export const updateUserSchema = z
     active: z.enum(["true", "false"], { error: "active must be true or false." }).transform((v) => v === "true").optional(),
   })
   .refine((v) => v.role !== undefined || v.active !== undefined, { error: "Change the role or the active state.", path: ["role"] });
+
+export const sendResetLinkSchema = z.object({ userId: z.uuid({ error: "userId must be a user's id." }) });

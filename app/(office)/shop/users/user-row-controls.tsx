@@ -4,10 +4,12 @@ import { useActionState } from "react";
 import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/field";
 import type { UserRole } from "@/db/schema";
-import { updateUserAction } from "./actions";
+import { sendResetLinkAction, updateUserAction } from "./actions";
 
 export function UserRowControls({ user }: { user: { id: string; name: string; role: UserRole; active: boolean } }) {
   const [result, action, pending] = useActionState(updateUserAction, undefined);
+  const [resetResult, resetAction, resetPending] = useActionState(sendResetLinkAction, undefined);
+  const resetError = resetResult && resetResult.httpStatus !== 200 ? (resetResult.error?.[""] ?? []) : undefined;
   const error = result && result.httpStatus !== 200 ? (result.error?.[""] ?? Object.values(result.error ?? {}).flat()) : undefined;
   return (
     <div className="flex flex-col gap-1">
@@ -33,10 +35,27 @@ export function UserRowControls({ user }: { user: { id: string; name: string; ro
             {user.active ? "Deactivate" : "Reactivate"}
           </Button>
         </form>
+        {user.active ? (
+          <form action={resetAction}>
+            <input type="hidden" name="userId" value={user.id} />
+            <Button type="submit" variant="quiet" disabled={resetPending}>
+              {resetPending ? "Sending…" : "Send reset link"}
+            </Button>
+          </form>
+        ) : null}
       </div>
       {error?.length ? (
         <p role="alert" className="text-sm text-fault">
           {error.join(" ")}
+        </p>
+      ) : null}
+      {resetError?.length ? (
+        <p role="alert" className="text-sm text-fault">
+          {resetError.join(" ")}
+        </p>
+      ) : resetResult?.httpStatus === 200 ? (
+        <p role="status" className="text-sm text-graphite">
+          {resetResult.message}
         </p>
       ) : null}
     </div>

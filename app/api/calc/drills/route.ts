@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { invalidInput } from "@/lib/api";
+import { apiRoute } from "@/lib/api";
 import { drillDto } from "@/lib/calc-dto";
 import { ALL_DRILLS, DRILL_SYSTEMS } from "@/lib/engineering/drills";
 
@@ -8,9 +8,7 @@ const querySchema = z.object({
 });
 
 /** The standard drill series, smallest first. Public: it holds no shop data. */
-export async function GET(request: Request) {
-  const query = querySchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
-  if (!query.success) return invalidInput(query.error);
-  const drills = query.data.system ? ALL_DRILLS.filter((d) => d.system === query.data.system) : ALL_DRILLS;
+export const GET = apiRoute({ roles: "public", query: querySchema }, async ({ query }) => {
+  const drills = query.system ? ALL_DRILLS.filter((d) => d.system === query.system) : ALL_DRILLS;
   return Response.json({ drills: drills.map(drillDto) });
-}
+});

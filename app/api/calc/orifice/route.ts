@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { apiError, invalidInput, readJson } from "@/lib/api";
+import { apiError, apiRoute } from "@/lib/api";
 import { areaIn2, areaMm2, tidy } from "@/lib/calc-dto";
 import { fuelProperties } from "@/lib/engineering/fuels";
 import { areaFromMassFlow, diameterForArea } from "@/lib/engineering/orifice";
@@ -17,15 +17,11 @@ const bodySchema = z
   .refine((b) => b.fuel !== undefined || b.densityKgM3 !== undefined, { error: "give fuel or densityKgM3", path: ["fuel"] });
 
 /** Orifice area that passes a fuel flow at a pressure difference: A = m / (Cd sqrt(2 rho dP)). */
-export async function POST(request: Request) {
-  const json = await readJson(request);
-  if (!json.ok) return json.response;
-  const parsed = bodySchema.safeParse(json.value);
-  if (!parsed.success) return invalidInput(parsed.error);
-  const { flow, dP, cd } = parsed.data;
+export const POST = apiRoute({ roles: "public", body: bodySchema }, async ({ body }) => {
+  const { flow, dP, cd } = body;
   let densityKgM3: number;
   try {
-    densityKgM3 = parsed.data.densityKgM3 ?? fuelProperties(parsed.data.fuel!).densityKgM3;
+    densityKgM3 = body.densityKgM3 ?? fuelProperties(body.fuel!).densityKgM3;
   } catch (error) {
     return apiError(400, "invalid_input", `fuel: ${(error as Error).message}`, { field: "fuel" });
   }
@@ -41,4 +37,4 @@ export async function POST(request: Request) {
     massFlowKgS,
     densityKgM3,
   });
-}
+});

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { invalidInput, readJson } from "@/lib/api";
+import { apiRoute } from "@/lib/api";
 import { areaIn2, drillDto, tidy } from "@/lib/calc-dto";
 import { ALL_DRILLS } from "@/lib/engineering/drills";
 import { MAX_HOLES_PER_CHANNEL, solveHoleLayout } from "@/lib/engineering/hole-layout";
@@ -28,12 +28,7 @@ const bodySchema = z
   });
 
 /** Hole layouts (count x drill) for a channel restriction, best first. */
-export async function POST(request: Request) {
-  const json = await readJson(request);
-  if (!json.ok) return json.response;
-  const parsed = bodySchema.safeParse(json.value);
-  if (!parsed.success) return invalidInput(parsed.error);
-  const body = parsed.data;
+export const POST = apiRoute({ roles: "public", body: bodySchema }, async ({ body }) => {
   const drills = body.drills ?? ALL_DRILLS;
   const inches = (v: number | undefined) => (v === undefined ? undefined : toSI("length", v, "in"));
   const candidates = solveHoleLayout({
@@ -58,4 +53,4 @@ export async function POST(request: Request) {
       valveLimited: c.valveLimited,
     })),
   });
-}
+});

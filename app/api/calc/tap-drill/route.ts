@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { invalidInput } from "@/lib/api";
+import { apiRoute, invalidInput } from "@/lib/api";
 import { drillDto, tidy } from "@/lib/calc-dto";
 import { parseThread, tapDrill } from "@/lib/engineering/threads";
 import { engagementSchema } from "@/app/(office)/reference/calculators/tap-drill/schema";
@@ -16,16 +16,14 @@ const querySchema = z.object({
 });
 
 /** Tap drill for a thread at a target engagement: the ideal diameter and the nearest standard drill. */
-export async function GET(request: Request) {
-  const query = querySchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
-  if (!query.success) return invalidInput(query.error);
-  const thread = parseThread(query.data.thread);
+export const GET = apiRoute({ roles: "public", query: querySchema }, async ({ query }) => {
+  const thread = parseThread(query.thread);
   if (!thread) {
     return invalidInput(
-      new z.ZodError([{ code: "custom", path: ["thread"], message: `"${query.data.thread}" is not a Unified #0-1/2 in or ISO M1.6-M12 thread`, input: query.data.thread }]),
+      new z.ZodError([{ code: "custom", path: ["thread"], message: `"${query.thread}" is not a Unified #0-1/2 in or ISO M1.6-M12 thread`, input: query.thread }]),
     );
   }
-  const result = tapDrill(thread, { engagementPct: query.data.engagement ?? 75, allowOtherSystem: query.data.allowOtherSystem === "true" });
+  const result = tapDrill(thread, { engagementPct: query.engagement ?? 75, allowOtherSystem: query.allowOtherSystem === "true" });
   return Response.json({
     thread: {
       label: thread.label,
@@ -41,4 +39,4 @@ export async function GET(request: Request) {
     drill: drillDto(result.drill),
     engagementPct: tidy(result.engagementPct, 2),
   });
-}
+});

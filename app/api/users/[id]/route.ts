@@ -1,7 +1,7 @@
 import { z } from "zod";
-import { invalidInput, readJson, refusalResponse } from "@/lib/api";
-import { authorize } from "@/lib/auth/api-access";
+import { apiRoute } from "@/lib/api";
 import { changeAccount } from "@/lib/auth/accounts";
+import { idParams } from "@/lib/route-params";
 
 const patchSchema = z
   .object({
@@ -11,19 +11,6 @@ const patchSchema = z
   .strict()
   .refine((v) => v.role !== undefined || v.active !== undefined, { error: "give role or active", path: ["role"] });
 
-export async function PATCH(request: Request, { params }: { params: Promise<{ id: string }> }) {
-  const { id } = await params;
-  const idCheck = z.uuid({ error: "id must be a user's id" }).safeParse(id);
-  if (!idCheck.success) return invalidInput(new z.ZodError(idCheck.error.issues.map((i) => ({ ...i, path: ["id"] }))));
-  const body = await readJson(request);
-  if (!body.ok) return body.response;
-  const parsed = patchSchema.safeParse(body.value);
-  if (!parsed.success) return invalidInput(parsed.error);
-  const access = await authorize(["admin"]);
-  if (!access.ok) return access.response;
-  try {
-    return Response.json({ user: await changeAccount(access.user.id, { userId: id, ...parsed.data }) });
-  } catch (error) {
-    return refusalResponse(error);
-  }
-}
+export const PATCH = apiRoute({ roles: ["admin"], params: idParams("id"), body: patchSchema }, async ({ user, params, body }) =>
+  Response.json({ user: await changeAccount(user.id, { userId: params.id, ...body }) }),
+);

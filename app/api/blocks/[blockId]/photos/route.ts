@@ -1,46 +1,34 @@
 import { z } from "zod";
 import { getVisibleBlock } from "@/db/attachments";
-import { apiError, invalidInput, refusalResponse } from "@/lib/api";
-import { authorize } from "@/lib/auth/api-access";
+import { apiError, apiRoute, invalidInput } from "@/lib/api";
 import { ALL_ROLES } from "@/lib/auth/session";
 import { storeBlockPhoto } from "@/lib/photo-upload";
 import { MAX_PHOTO_BYTES } from "@/lib/photos";
-import { parseIdParam } from "@/lib/route-params";
+import { idParams } from "@/lib/route-params";
 
 const fieldsSchema = z.object({
   operationId: z.uuid({ error: "operationId must be an operation's id" }).optional(),
 });
 
+// Multipart framing and the operationId field add a little to the photo itself; a bigger body is cut off
+// while it streams (413), and checkPhoto refuses a photo over MAX_PHOTO_BYTES.
+const MAX_UPLOAD_BYTES = MAX_PHOTO_BYTES + 64 * 1024;
+
 /** Uploads one photo of a block (multipart field `photo`, optional `operationId`). Images only, checked by content. */
-export async function POST(request: Request, { params }: { params: Promise<{ blockId: string }> }) {
-  const id = parseIdParam((await params).blockId, "blockId");
-  if (!id.ok) return invalidInput(id.error);
-  const access = await authorize(ALL_ROLES);
-  if (!access.ok) return access.response;
-  const declared = Number(request.headers.get("content-length") ?? 0);
-  // Multipart framing adds a little; anything far beyond the limit is refused before it is read.
-  if (declared > MAX_PHOTO_BYTES + 64 * 1024) {
-    return apiError(413, "invalid_input", `photo: photos may be at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB`, { field: "photo" });
-  }
-  let form: FormData;
-  try {
-    form = await request.formData();
-  } catch {
-    return apiError(400, "invalid_input", "photo: send the photo as multipart form data", { field: "photo" });
-  }
-  const file = form.get("photo");
-  if (!(file instanceof File)) return apiError(400, "invalid_input", "photo: choose a photo to upload", { field: "photo" });
-  const fields = fieldsSchema.safeParse({ operationId: form.get("operationId") || undefined });
-  if (!fields.success) return invalidInput(fields.error);
-  if (!(await getVisibleBlock(access.user, id.id))) return apiError(404, "not_found", "No such block.");
-  try {
-    const photo = await storeBlockPhoto(access.user, {
-      blockId: id.id,
+export const POST = apiRoute(
+  { roles: ALL_ROLES, params: idParams("blockId"), multipart: { maxBytes: MAX_UPLOAD_BYTES, field: "photo" } },
+  async ({ user, params, form }) => {
+    const file = form!.get("photo");
+    if (!(file instanceof File)) return apiError(400, "invalid_input", "photo: choose a photo to upload", { field: "photo" });
+    const operationId = form!.get("operationId");
+    const fields = fieldsSchema.safeParse({ operationId: typeof operationId === "string" && operationId ? operationId : undefined });
+    if (!fields.success) return invalidInput(fields.error);
+    if (!(await getVisibleBlock(user, params.blockId))) return apiError(404, "not_found", "No such block.");
+    const photo = await storeBlockPhoto(user, {
+      blockId: params.blockId,
       operationId: fields.data.operationId,
       bytes: Buffer.from(await file.arrayBuffer()),
     });
     return Response.json({ photo: { id: photo.id, url: `/api/photos/${photo.id}`, thumbnailUrl: `/api/photos/${photo.id}?size=thumb` } }, { status: 201 });
-  } catch (error) {
-    return refusalResponse(error);
-  }
-}
+  },
+);

@@ -1,6 +1,5 @@
 import { z } from "zod";
-import { apiError, invalidInput } from "@/lib/api";
-import { authorize } from "@/lib/auth/api-access";
+import { apiError, apiRoute } from "@/lib/api";
 import { getOutboxAttachment, OUTBOX_NAME } from "@/lib/outbox";
 
 const paramsSchema = z.object({
@@ -12,12 +11,8 @@ const paramsSchema = z.object({
 const RENDERABLE = /^(text\/html|application\/xhtml|image\/svg|text\/xml|application\/xml)/i;
 
 /** One attachment of a message in the mail fake's outbox, as a download. Admin only. */
-export async function GET(_request: Request, { params }: { params: Promise<{ name: string; index: string }> }) {
-  const parsed = paramsSchema.safeParse(await params);
-  if (!parsed.success) return invalidInput(parsed.error);
-  const access = await authorize(["admin"]);
-  if (!access.ok) return access.response;
-  const attachment = await getOutboxAttachment(parsed.data.name, parsed.data.index);
+export const GET = apiRoute({ roles: ["admin"], params: paramsSchema }, async ({ params }) => {
+  const attachment = await getOutboxAttachment(params.name, params.index);
   if (!attachment) return apiError(404, "not_found", "No such message or attachment in the outbox.");
   const contentType = RENDERABLE.test(attachment.contentType) ? "application/octet-stream" : attachment.contentType;
   const fallbackName = attachment.filename.replace(/[^\x20-\x7e]|["\\]/g, "_");
@@ -26,8 +21,7 @@ export async function GET(_request: Request, { params }: { params: Promise<{ nam
       "content-type": contentType,
       "content-length": String(attachment.content.length),
       "content-disposition": `attachment; filename="${fallbackName}"; filename*=UTF-8''${encodeURIComponent(attachment.filename)}`,
-      "x-content-type-options": "nosniff",
       "cache-control": "private, no-store",
     },
   });
-}
+});

@@ -1,0 +1,55 @@
+"use client";
+
+import { getFormProps, getInputProps, useForm } from "@conform-to/react";
+import { parseWithZod } from "@conform-to/zod/v4";
+import { useActionState } from "react";
+import { Button } from "@/components/ui/button";
+import { Field, FormMessage, Input } from "@/components/ui/field";
+import { changePasswordAction, signOutEverywhereAction } from "./actions";
+import { changePasswordSchema } from "./schema";
+
+export function PasswordForm() {
+  const [lastResult, action, pending] = useActionState(changePasswordAction, undefined);
+  const [form, fields] = useForm({
+    id: "change-password",
+    lastResult,
+    shouldValidate: "onBlur",
+    shouldRevalidate: "onInput",
+    onValidate: ({ formData }) => parseWithZod(formData, { schema: changePasswordSchema }),
+  });
+  return (
+    <form {...getFormProps(form)} action={action} aria-label="Change your password" className="flex flex-col gap-4" noValidate>
+      <FormMessage errors={form.errors} />
+      <Field label="Current password" htmlFor={fields.currentPassword.id} errors={fields.currentPassword.errors} errorId={fields.currentPassword.errorId}>
+        <Input {...getInputProps(fields.currentPassword, { type: "password" })} key={fields.currentPassword.key} autoComplete="current-password" />
+      </Field>
+      <Field
+        label="New password"
+        htmlFor={fields.newPassword.id}
+        errors={fields.newPassword.errors}
+        errorId={fields.newPassword.errorId}
+        hint="At least 12 characters, not your e-mail or name. A few unrelated words make a good one."
+      >
+        <Input {...getInputProps(fields.newPassword, { type: "password" })} key={fields.newPassword.key} autoComplete="new-password" />
+      </Field>
+      <Field label="New password again" htmlFor={fields.confirmPassword.id} errors={fields.confirmPassword.errors} errorId={fields.confirmPassword.errorId}>
+        <Input {...getInputProps(fields.confirmPassword, { type: "password" })} key={fields.confirmPassword.key} autoComplete="new-password" />
+      </Field>
+      <Button type="submit" disabled={pending}>
+        {pending ? "Saving…" : "Change password"}
+      </Button>
+    </form>
+  );
+}
+
+export function SignOutEverywhereForm() {
+  const [result, action, pending] = useActionState(signOutEverywhereAction, undefined);
+  return (
+    <form action={action} aria-label="Sign out everywhere" className="flex flex-col gap-2">
+      <FormMessage errors={result?.error?.[""] ?? undefined} />
+      <Button type="submit" variant="secondary" disabled={pending}>
+        {pending ? "Signing out…" : "Sign out on every device"}
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,9 @@
+import { apiRoute } from "@/lib/api";
+import { sendPasswordReset } from "@/lib/auth/passwords";
+import { idParams } from "@/lib/route-params";
+
+/** Mails the user a single-use link to set a new password (202). Admin only. */
+export const POST = apiRoute({ roles: ["admin"], params: idParams("id") }, async ({ user, params }) => {
+  await sendPasswordReset(user, params.id);
+  return new Response(null, { status: 202 });
+});
