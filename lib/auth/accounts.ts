@@ -3,11 +3,13 @@ import { createUser, DuplicateEmailError, updateUser, type UserSummary } from "@
 import type { UserRole } from "@/db/schema";
 import { RequestRefusal } from "@/lib/errors";
 import { hashPassword } from "./credentials";
+import { refuseWeak } from "./passwords";
 
 export async function createAccount(
   actorId: string,
   input: { email: string; name: string; role: UserRole; password: string },
 ): Promise<UserSummary> {
+  refuseWeak(input.password, input, "password");
   try {
     return await createUser({ actorId, email: input.email, name: input.name, role: input.role, passwordHash: await hashPassword(input.password) });
   } catch (error) {

@@ -7,6 +7,7 @@ import { getEnv } from "@/lib/env";
 import { RequestRefusal } from "@/lib/errors";
 import { sendMail, sendMailSafely } from "@/lib/mail";
 import { passwordProblem } from "@/lib/password-policy";
+import { guessablePasswordProblem } from "./password-strength";
 import type { SessionUser } from "./session";
 import { hashPassword } from "./credentials";
 
@@ -17,8 +18,9 @@ function tokenHash(token: string): string {
   return createHash("sha256").update(token).digest("hex");
 }
 
-function refuseWeak(password: string, person: { email: string; name: string }, field: string): void {
-  const problem = passwordProblem(password, person);
+/** The form's rules, then how guessable the password is (server-side only: see password-strength.ts). */
+export function refuseWeak(password: string, person: { email: string; name: string }, field: string): void {
+  const problem = passwordProblem(password, person) ?? guessablePasswordProblem(password, [person.email, person.name]);
   if (problem) throw new RequestRefusal(400, problem, field);
 }
 
