@@ -1,6 +1,7 @@
 import "server-only";
+import pino from "pino";
 
-// Structured server log: one JSON line per event on stderr. Secrets and personal data never reach it: keys
+// Structured server log (pino): one JSON line per event on stderr. Secrets and personal data never reach it: keys
 // naming passwords, hashes, tokens, cookies or e-mails are replaced, e-mail addresses inside text are masked,
 // and a failed query is logged by its SQL text and error code only, never its parameters or the row values
 // PostgreSQL repeats in its messages.
@@ -41,9 +42,16 @@ function redact(value: unknown, depth = 0): unknown {
   );
 }
 
+// pino writes the JSON lines (level names, ISO time); what it is given is already redacted above, since its own
+// redaction takes fixed paths and a secret can sit under any key. Written through process.stderr so that the
+// process (and a test) sees every line.
+const logger = pino(
+  { base: undefined, timestamp: pino.stdTimeFunctions.isoTime, formatters: { level: (label) => ({ level: label }) } },
+  { write: (line: string) => process.stderr.write(line) },
+);
+
 function write(level: Level, fields: Record<string, unknown>, message: string): void {
-  const line = JSON.stringify({ level, time: new Date().toISOString(), msg: maskText(message), ...(redact(fields) as object) });
-  process.stderr.write(`${line}\n`);
+  logger[level](redact(fields) as object, maskText(message));
 }
 
 export const log = {
