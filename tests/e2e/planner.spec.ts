@@ -141,6 +141,8 @@ test("a tuner plans, approves and releases a job; the machinist reads it; an edi
   await blocks.save();
   await expect(page).toHaveURL(new RegExp(`/jobs/${jobId}$`));
   await expect(job.state()).toHaveText("draft");
+  // Still the same lean staging: revision 2 is approved with the acknowledgement too, and it is kept with it.
+  await stateForm.getByRole("checkbox", { name: /danger warning/ }).check();
   await job.move("Approve as revision 2", /Revision 2 approved/);
   await expect(job.revisionRow(2)).toContainText("current");
   await expect(job.revisionRow(1)).toContainText("superseded");
