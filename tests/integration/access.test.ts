@@ -38,6 +38,7 @@ import { pickupTubeAction } from "@/app/(office)/reference/calculators/pickup-tu
 import { stagingAction } from "@/app/(office)/reference/calculators/staging/actions";
 import * as referenceForms from "./support/reference-forms";
 import { blocksBody } from "./support/jobs";
+import { GET as healthRoute } from "@/app/api/health/route";
 
 async function machinistId(): Promise<string> {
   const [row] = await testDb.select({ id: schema.users.id }).from(schema.users).where(eq(schema.users.email, "machinist@blockwright.test"));
@@ -57,8 +58,15 @@ const EVERYONE = (ok: number): Record<Actor, number> => ({ anonymous: 401, machi
 const jobParams = (id: string) => ({ params: Promise.resolve({ id }) });
 
 const ADMIN_ONLY = (ok: number): Record<Actor, number> => ({ anonymous: 401, machinist: 403, tuner: 403, admin: ok });
+const PUBLIC = (ok: number): Record<Actor, number> => ({ anonymous: ok, machinist: ok, tuner: ok, admin: ok });
 
 const CASES: AccessCase[] = [
+  {
+    // For monitors and load balancers: it tells whether the database answers, nothing about the shop.
+    name: "GET /api/health",
+    expected: PUBLIC(200),
+    call: async () => (await healthRoute()).status,
+  },
   {
     name: "POST /api/operations/{id}/sign-off (released job)",
     expected: EVERYONE(201),
