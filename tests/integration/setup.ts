@@ -3,16 +3,17 @@
 // lookup and the cache.
 import { tmpdir } from "node:os";
 import { inject, vi } from "vitest";
+import { claimWorkerDatabase } from "./support/claim-database";
 
 process.env.NEXTAUTH_SECRET ??= "integration-test-secret-0123456789";
 // The outbox page reads the mail fake's folder: tests get their own, never the developer's .data/outbox.
 process.env.MAIL_OUTBOX_DIR ??= `${tmpdir()}/blockwright-it-outbox-${process.pid}`;
 // Before anything reads the configuration: this worker's database, not the base one named in DATABASE_URL.
-const workerDatabaseUrl = inject("workerDatabaseUrls")[Number(process.env.VITEST_POOL_ID ?? "1") - 1];
-if (!workerDatabaseUrl) {
-  throw new Error(`No test database for worker ${process.env.VITEST_POOL_ID}: run the integration tests through \`npm test\`.`);
+const baseDatabaseUrl = process.env.DATABASE_URL;
+if (!baseDatabaseUrl) {
+  throw new Error("DATABASE_URL must point at a test database: run the integration tests through `npm test`.");
 }
-process.env.DATABASE_URL = workerDatabaseUrl;
+process.env.DATABASE_URL = await claimWorkerDatabase(baseDatabaseUrl, inject("workerDatabaseUrls"), Number(process.env.VITEST_POOL_ID ?? "1") - 1);
 
 vi.mock("next-auth", async (importOriginal) => {
   const original = await importOriginal<typeof import("next-auth")>();
