@@ -244,7 +244,7 @@ export async function runLoadSection(): Promise<void> {
   const distDir = path.resolve(ROOT, process.env.NEXT_DIST_DIR || ".next");
   console.log("\nLoad: the production app under next start");
   if (!databaseUrl) {
-    console.log("  skipped: no BENCH_DATABASE_URL (run it through `npm run bench`, which seeds one)");
+    console.log("  skipped: no seeded bench database (BENCH_DATABASE_URL); `npm run bench` prepares one, or says above why it could not");
     return;
   }
   if (!existsSync(path.join(distDir, "BUILD_ID"))) {

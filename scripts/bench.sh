@@ -12,14 +12,16 @@ ensure_node_modules
 export NEXTAUTH_SECRET="${NEXTAUTH_SECRET:-blockwright-bench-secret-not-for-production}"
 export NEXT_DIST_DIR=.next-test
 
+prepare_load=1
 if [ -z "${BENCH_DATABASE_URL:-}" ]; then
   if [ -n "${DATABASE_URL:-}" ]; then
-    log "DATABASE_URL names a server of your own: set BENCH_DATABASE_URL to a database the bench may empty"
-    exit 1
+    log "DATABASE_URL names a server of your own: set BENCH_DATABASE_URL to a database the bench may empty (load section skipped)"
+    prepare_load=0
+  else
+    ensure_local_postgres
+    create_database blockwright_bench --fresh
+    BENCH_DATABASE_URL="$(local_database_url blockwright_bench)"
   fi
-  ensure_local_postgres
-  create_database blockwright_bench --fresh
-  BENCH_DATABASE_URL="$(local_database_url blockwright_bench)"
 else
   # The database is named by its URL: recreated through the server's maintenance database.
   name="${BENCH_DATABASE_URL##*/}"
@@ -27,18 +29,20 @@ else
     -c "DROP DATABASE IF EXISTS \"$name\" WITH (FORCE)" -c "CREATE DATABASE \"$name\"" >/dev/null
 fi
 
-mkdir -p .data
-(
-  DATABASE_URL="$BENCH_DATABASE_URL" npx tsx db/migrate.ts
-  DATABASE_URL="$BENCH_DATABASE_URL" npx tsx --conditions=react-server db/seed.ts
-  ensure_build
-) > .data/bench-prepare.log 2>&1 &
-if wait $!; then
-  export BENCH_DATABASE_URL
-else
-  cat .data/bench-prepare.log
-  log "preparing the load section failed (above): it is skipped"
-  unset BENCH_DATABASE_URL
+if [ "$prepare_load" = 1 ]; then
+  mkdir -p .data
+  (
+    DATABASE_URL="$BENCH_DATABASE_URL" npx tsx db/migrate.ts
+    DATABASE_URL="$BENCH_DATABASE_URL" npx tsx --conditions=react-server db/seed.ts
+    ensure_build
+  ) > .data/bench-prepare.log 2>&1 &
+  if wait $!; then
+    export BENCH_DATABASE_URL
+  else
+    cat .data/bench-prepare.log
+    log "preparing the load section failed (above): it is skipped"
+    unset BENCH_DATABASE_URL
+  fi
 fi
 
 NODE_ENV=production npx tsx scripts/bench.ts
