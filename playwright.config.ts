@@ -29,11 +29,14 @@ const chromium = {
   ],
 };
 
+const desktop = { ...devices["Desktop Chrome"], launchOptions: chromium };
+
 export default defineConfig({
   testDir: "tests/e2e",
   outputDir: "test-results",
   fullyParallel: false,
-  workers: 1,
+  // Two browsers at a time; specs that read records another spec changes are chained by the projects below.
+  workers: 2,
   retries: 0,
   timeout: 60_000,
   expect: { timeout: 10_000 },
@@ -44,9 +47,20 @@ export default defineConfig({
     trace: "retain-on-failure",
     screenshot: "only-on-failure",
   },
+  // Each role signs in once ("sign-in"); the specs reuse the session unless signing in is what they test.
+  // Specs that share demo records run one after the other, in the order of their dependencies: the tuner's
+  // inch/mm choice (reference changes it; the new-job form, the planner and the bench pages read it), the
+  // newest job in the sorted table (jobs reads it; planner and phone add jobs) and the outbox's newest
+  // message (phone reads it; planner's release sends mail). The sign-in spec shares none of these and
+  // runs beside them.
   projects: [
-    { name: "desktop", use: { ...devices["Desktop Chrome"], launchOptions: chromium }, testIgnore: /\.phone\.spec\.ts$/ },
-    { name: "phone", use: { ...devices["Pixel 7"], launchOptions: chromium }, testMatch: /\.phone\.spec\.ts$/ },
+    { name: "sign-in", use: desktop, testMatch: /\.setup\.ts$/, fullyParallel: true },
+    { name: "desktop", use: desktop, testMatch: /auth\.spec\.ts$/, fullyParallel: true, dependencies: ["sign-in"] },
+    // Its tests change nothing the others read, so they share the two workers.
+    { name: "desktop-jobs", use: desktop, testMatch: /jobs\.spec\.ts$/, fullyParallel: true, dependencies: ["sign-in"] },
+    { name: "desktop-reference", use: desktop, testMatch: /reference\.spec\.ts$/, dependencies: ["desktop-jobs"] },
+    { name: "desktop-planner", use: desktop, testMatch: /planner\.spec\.ts$/, dependencies: ["desktop-reference"] },
+    { name: "phone", use: { ...devices["Pixel 7"], launchOptions: chromium }, testMatch: /\.phone\.spec\.ts$/, dependencies: ["desktop-planner"] },
   ],
   webServer: [
     {

@@ -3,6 +3,10 @@ import path from "node:path";
 
 const alias = { "@": path.resolve(import.meta.dirname) };
 
+// Integration workers: their files wait on PostgreSQL much of the time, so one more worker than cores
+// keeps the CPU busy. Each worker has a database of its own (tests/integration/global-setup.ts).
+const integrationWorkers = Number(process.env.BLOCKWRIGHT_IT_WORKERS) || 3;
+
 export default defineConfig({
   test: {
     projects: [
@@ -12,6 +16,10 @@ export default defineConfig({
           name: "unit",
           environment: "node",
           include: ["tests/unit/**/*.test.ts", "lib/**/*.test.ts"],
+          // Pure computations with no module state to leak: every file in one worker, modules loaded once.
+          isolate: false,
+          maxWorkers: 1,
+          sequence: { groupOrder: 0 },
         },
       },
       {
@@ -20,8 +28,12 @@ export default defineConfig({
           name: "integration",
           environment: "node",
           include: ["tests/integration/**/*.test.ts"],
+          // Each file keeps its own module graph: files set the configuration (base URL, fake ports) before
+          // it is first read and cached.
+          globalSetup: ["tests/integration/global-setup.ts"],
           setupFiles: ["tests/integration/setup.ts"],
-          fileParallelism: false,
+          maxWorkers: integrationWorkers,
+          sequence: { groupOrder: 1 },
           testTimeout: 30_000,
           hookTimeout: 60_000,
         },

@@ -20,12 +20,28 @@ apt_install() {
   DEBIAN_FRONTEND=noninteractive as_root apt-get install -y -qq "$@" >/dev/null
 }
 
-# node_modules is installed with `npm ci` when missing or older than the lock file.
+# node_modules is installed with `npm ci` when missing or when the lock file asks for a package (or a
+# version) it does not hold. A lock file that is only newer (a checkout or a new worktree touches it) is
+# compared by content: reinstalling costs half a minute and would replace a shared node_modules.
 ensure_node_modules() {
-  if [ ! -d "$ROOT/node_modules" ] || [ "$ROOT/package-lock.json" -nt "$ROOT/node_modules/.package-lock.json" ]; then
+  if [ ! -d "$ROOT/node_modules" ] || { [ "$ROOT/package-lock.json" -nt "$ROOT/node_modules/.package-lock.json" ] && ! lock_matches_node_modules; }; then
     log "installing npm packages (npm ci)"
     (cd "$ROOT" && npm ci --no-audit --no-fund)
   fi
+}
+
+# True when every package the lock file requires (optional ones aside: they may be for another platform)
+# is installed at the locked version, according to npm's record in node_modules/.package-lock.json.
+lock_matches_node_modules() {
+  (cd "$ROOT" && node -e '
+    const fs = require("fs");
+    const read = (file) => JSON.parse(fs.readFileSync(file, "utf8")).packages ?? {};
+    let installed;
+    try { installed = read("node_modules/.package-lock.json"); } catch { process.exit(1); }
+    const wanted = Object.entries(read("package-lock.json"));
+    const missing = wanted.filter(([key, entry]) => key !== "" && !entry.optional && !entry.peer && installed[key]?.version !== entry.version);
+    process.exit(missing.length ? 1 : 0);
+  ')
 }
 
 pg_bin() {

@@ -1,5 +1,6 @@
 import { expect, test, type Page } from "@playwright/test";
-import { screenshotPath, SignInPage } from "./support/accounts";
+import { screenshotPath } from "./support/accounts";
+import { openSignedIn } from "./support/sessions";
 
 // The office's lists: opening a job through the form, finding it in the jobs table, the customers and
 // the drill rack. Runs on the seeded demo shop (three customers, three jobs, inch drills on the rack).
@@ -15,7 +16,7 @@ function jobNumbers(page: Page) {
 test("a tuner opens a job for a new customer, is told what is missing, and finds the job in the sorted, filtered table", async ({ page }) => {
   // A name of its own for each run, so a rerun on the same database still finds exactly one.
   const customer = `Tamsin Ravel ${Date.now().toString(36).slice(-4).toUpperCase()}`;
-  await new SignInPage(page).signInAs("tuner");
+  await openSignedIn(page, "tuner");
   await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Jobs" }).click();
   await expect(page.getByRole("heading", { level: 1, name: "Jobs" })).toBeVisible();
   await page.getByRole("link", { name: "New job" }).click();
@@ -90,7 +91,7 @@ test("a tuner opens a job for a new customer, is told what is missing, and finds
 });
 
 test("a search that matches nothing says so, and clearing it brings the jobs back", async ({ page }) => {
-  await new SignInPage(page).signInAs("admin");
+  await openSignedIn(page, "admin");
   await page.goto("/jobs?q=no-such-job-anywhere");
   await expect(page.getByText("No jobs match “no-such-job-anywhere”.")).toBeVisible();
   await page.getByRole("table").getByRole("button", { name: "Clear filters" }).click();
@@ -99,7 +100,7 @@ test("a search that matches nothing says so, and clearing it brings the jobs bac
 });
 
 test("when the list cannot be read the table says why, and Retry reads it again", async ({ page }) => {
-  await new SignInPage(page).signInAs("tuner");
+  await openSignedIn(page, "tuner");
   let failing = true;
   await page.route(/\/api\/jobs\?/, (route) =>
     failing
@@ -116,7 +117,7 @@ test("when the list cannot be read the table says why, and Retry reads it again"
 });
 
 test("a machinist sees released work only, and no way to open a job", async ({ page }) => {
-  await new SignInPage(page).signInAs("machinist");
+  await openSignedIn(page, "machinist");
   await page.goto("/jobs");
   await expect(page.getByRole("status").filter({ hasText: /of \d+$/ })).toBeVisible();
   const states = await page.getByRole("table").locator("tbody tr td:nth-child(2)").allTextContents();
@@ -126,7 +127,7 @@ test("a machinist sees released work only, and no way to open a job", async ({ p
 });
 
 test("an admin finds a customer and follows their jobs into the filtered table", async ({ page }) => {
-  await new SignInPage(page).signInAs("admin");
+  await openSignedIn(page, "admin");
   await page.goto("/shop/customers");
   await expect(page.getByRole("heading", { level: 1, name: "Customers" })).toBeVisible();
   const search = page.getByRole("search", { name: "Find customers" });
@@ -149,7 +150,7 @@ test("an admin finds a customer and follows their jobs into the filtered table",
 
 test("an admin adds a customer and corrects them, with the field named when it is wrong", async ({ page }) => {
   const name = `Ottoline Brisk ${Date.now().toString(36).slice(-4).toUpperCase()}`;
-  await new SignInPage(page).signInAs("admin");
+  await openSignedIn(page, "admin");
   await page.goto("/shop/customers");
   const add = page.getByRole("form", { name: "Add a customer" });
   await add.getByLabel("Name").fill(name);
@@ -170,7 +171,7 @@ test("an admin adds a customer and corrects them, with the field named when it i
 });
 
 test("an admin takes a drill off the rack and it stays off after a reload", async ({ page }) => {
-  await new SignInPage(page).signInAs("admin");
+  await openSignedIn(page, "admin");
   await page.goto("/shop/drills");
   await expect(page.getByRole("heading", { level: 1, name: "Drill rack" })).toBeVisible();
   const drill = page.getByRole("checkbox", { name: "#43 on the rack" });
@@ -204,7 +205,7 @@ test("an admin takes a drill off the rack and it stays off after a reload", asyn
 });
 
 test("a tuner sees the rack but cannot change it", async ({ page }) => {
-  await new SignInPage(page).signInAs("tuner");
+  await openSignedIn(page, "tuner");
   await page.goto("/shop/drills");
   await expect(page.getByText("Only an admin changes the rack.")).toBeVisible();
   await expect(page.getByRole("checkbox", { name: "#43 on the rack" })).toBeDisabled();

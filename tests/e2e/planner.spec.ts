@@ -1,5 +1,6 @@
 import { expect, test } from "@playwright/test";
-import { screenshotPath, SignInPage } from "./support/accounts";
+import { screenshotPath } from "./support/accounts";
+import { openSignedIn } from "./support/sessions";
 import { BlocksForm, JobPage, newJobBody } from "./support/planner";
 
 // The tuner's way through a job: blocks and stages in, the plan and its fuel curve out, a layout of their
@@ -10,7 +11,7 @@ test("a tuner plans, approves and releases a job; the machinist reads it; an edi
   test.setTimeout(240_000);
   const tunerContext = await browser.newContext();
   const page = await tunerContext.newPage();
-  await new SignInPage(page).signInAs("tuner");
+  await openSignedIn(page, "tuner");
 
   // The job comes in through the JSON API, from the signed-in page.
   const customer = `Ilse Marrow ${Date.now().toString(36).slice(-4).toUpperCase()}`;
@@ -120,7 +121,7 @@ test("a tuner plans, approves and releases a job; the machinist reads it; an edi
   // The machinist, in a browser of their own, reads the released job and can change nothing.
   const benchContext = await browser.newContext();
   const bench = await benchContext.newPage();
-  await new SignInPage(bench).signInAs("machinist");
+  await openSignedIn(bench, "machinist");
   await new JobPage(bench).open(jobId);
   await expect(bench.getByTestId("job-state")).toHaveText("released");
   await expect(bench.getByTestId("staging-chart-full").locator("svg.recharts-surface")).toBeVisible();

@@ -1,5 +1,6 @@
 import { expect, test, type Page } from "@playwright/test";
-import { screenshotPath, SignInPage } from "./support/accounts";
+import { screenshotPath } from "./support/accounts";
+import { openSignedIn } from "./support/sessions";
 
 // The reference place as a tuner meets it: charts, the inch/mm switch, and the calculators.
 
@@ -10,7 +11,7 @@ async function chooseUnit(page: Page, unit: "in" | "mm") {
 }
 
 test.beforeEach(async ({ page }) => {
-  await new SignInPage(page).signInAs("tuner");
+  await openSignedIn(page, "tuner");
 });
 
 test("the drill chart finds drills by label and size, in the unit the user keeps", async ({ page }) => {

@@ -1,5 +1,6 @@
 import { devices, expect, test, type Browser, type BrowserContext } from "@playwright/test";
 import { ACCOUNTS, DEMO_PASSWORD, screenshotPath, SignInPage, type DemoRole } from "./support/accounts";
+import { openSignedIn } from "./support/sessions";
 import { benchPhoto, BenchPage, blockOf, downloadTraveler, moveJob, readJob, releaseNewJob, travelerQrText } from "./support/bench";
 
 // From the printed traveler to the phone at the bench: the QR code opens the right page, the machinist
@@ -10,7 +11,7 @@ test.describe.configure({ timeout: 180_000 });
 async function signedInContext(browser: Browser, baseURL: string, role: DemoRole, device: "phone" | "desk" = "phone"): Promise<BrowserContext> {
   const context = await browser.newContext(device === "phone" ? { ...devices["Pixel 7"], baseURL } : { viewport: { width: 1280, height: 900 }, baseURL });
   const page = await context.newPage();
-  await new SignInPage(page).signInAs(role);
+  await openSignedIn(page, role);
   await page.close();
   return context;
 }

@@ -47,6 +47,7 @@ import { POST as grindRoute } from "@/app/api/calc/grind/route";
 import { POST as pickupTubeRoute } from "@/app/api/calc/pickup-tube/route";
 import { POST as stagingRoute } from "@/app/api/calc/staging/route";
 import { blocksBody } from "./support/jobs";
+import { GET as healthRoute } from "@/app/api/health/route";
 
 async function machinistId(): Promise<string> {
   const [row] = await testDb.select({ id: schema.users.id }).from(schema.users).where(eq(schema.users.email, "machinist@blockwright.test"));
@@ -72,6 +73,12 @@ const inch = (value: number) => ({ value, unit: "in" });
 const ADMIN_ONLY = (ok: number): Record<Actor, number> => ({ anonymous: 401, machinist: 403, tuner: 403, admin: ok });
 
 const CASES: AccessCase[] = [
+  {
+    // For monitors and load balancers: it tells whether the database answers, nothing about the shop.
+    name: "GET /api/health",
+    expected: PUBLIC(200),
+    call: async () => (await healthRoute()).status,
+  },
   {
     name: "POST /api/account/password",
     expected: EVERYONE(204),

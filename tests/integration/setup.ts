@@ -1,14 +1,19 @@
-// Integration tests run the real data layer against PostgreSQL (DATABASE_URL, a test database prepared
-// by scripts/test.sh). Only the edges Next.js owns are replaced: the session lookup and the cache.
+// Integration tests run the real data layer against PostgreSQL: each worker on its own database, copied
+// from a migrated template by global-setup.ts. Only the edges Next.js owns are replaced: the session
+// lookup and the cache.
 import { tmpdir } from "node:os";
-import { vi } from "vitest";
+import { inject, vi } from "vitest";
+import { claimWorkerDatabase } from "./support/claim-database";
 
 process.env.NEXTAUTH_SECRET ??= "integration-test-secret-0123456789";
 // The outbox page reads the mail fake's folder: tests get their own, never the developer's .data/outbox.
 process.env.MAIL_OUTBOX_DIR ??= `${tmpdir()}/blockwright-it-outbox-${process.pid}`;
-if (!process.env.DATABASE_URL) {
+// Before anything reads the configuration: this worker's database, not the base one named in DATABASE_URL.
+const baseDatabaseUrl = process.env.DATABASE_URL;
+if (!baseDatabaseUrl) {
   throw new Error("DATABASE_URL must point at a test database: run the integration tests through `npm test`.");
 }
+process.env.DATABASE_URL = await claimWorkerDatabase(baseDatabaseUrl, inject("workerDatabaseUrls"), Number(process.env.VITEST_POOL_ID ?? "1") - 1);
 
 vi.mock("next-auth", async (importOriginal) => {
   const original = await importOriginal<typeof import("next-auth")>();
