@@ -5,6 +5,7 @@ import { parseWithZod } from "@conform-to/zod/v4";
 import { useActionState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Input } from "@/components/ui/field";
+import { NewPasswordFields } from "@/components/forms/new-password-fields";
 import { changePasswordAction, signOutEverywhereAction } from "./actions";
 import { changePasswordSchema } from "./schema";
 
@@ -23,18 +24,7 @@ export function PasswordForm() {
       <Field label="Current password" htmlFor={fields.currentPassword.id} errors={fields.currentPassword.errors} errorId={fields.currentPassword.errorId}>
         <Input {...getInputProps(fields.currentPassword, { type: "password" })} key={fields.currentPassword.key} autoComplete="current-password" />
       </Field>
-      <Field
-        label="New password"
-        htmlFor={fields.newPassword.id}
-        errors={fields.newPassword.errors}
-        errorId={fields.newPassword.errorId}
-        hint="At least 12 characters, not your e-mail or name. A few unrelated words make a good one."
-      >
-        <Input {...getInputProps(fields.newPassword, { type: "password" })} key={fields.newPassword.key} autoComplete="new-password" />
-      </Field>
-      <Field label="New password again" htmlFor={fields.confirmPassword.id} errors={fields.confirmPassword.errors} errorId={fields.confirmPassword.errorId}>
-        <Input {...getInputProps(fields.confirmPassword, { type: "password" })} key={fields.confirmPassword.key} autoComplete="new-password" />
-      </Field>
+      <NewPasswordFields newPassword={fields.newPassword} confirmPassword={fields.confirmPassword} hint="At least 12 characters, not your e-mail or name. A few unrelated words make a good one." />
       <Button type="submit" disabled={pending}>
         {pending ? "Saving…" : "Change password"}
       </Button>
