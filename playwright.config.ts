@@ -51,11 +51,15 @@ export default defineConfig({
   // Specs that share demo records run one after the other, in the order of their dependencies: the tuner's
   // inch/mm choice (reference changes it; the new-job form, the planner and the bench pages read it), the
   // newest job in the sorted table (jobs reads it; planner and phone add jobs) and the outbox's newest
-  // message (phone reads it; planner's release sends mail). The sign-in spec shares none of these and
-  // runs beside them.
+  // message (phone reads it; planner's release sends mail). The sign-in spec signs people out, which ends
+  // their saved sessions too, so it runs after all of them.
   projects: [
     { name: "sign-in", use: desktop, testMatch: /\.setup\.ts$/, fullyParallel: true },
-    { name: "desktop", use: desktop, testMatch: /auth\.spec\.ts$/, fullyParallel: true, dependencies: ["sign-in"] },
+    // Signing out ends every session of that person (the session version is per user), the saved ones
+    // included: the sign-in spec runs last, one test at a time.
+    { name: "desktop", use: desktop, testMatch: /auth\.spec\.ts$/, fullyParallel: false, dependencies: ["phone"] },
+    // Signs in through the form and never out: beside the chain.
+    { name: "desktop-security", use: desktop, testMatch: /security-headers\.spec\.ts$/, dependencies: ["sign-in"] },
     // Its tests change nothing the others read, so they share the two workers.
     { name: "desktop-jobs", use: desktop, testMatch: /jobs\.spec\.ts$/, fullyParallel: true, dependencies: ["sign-in"] },
     { name: "desktop-reference", use: desktop, testMatch: /reference\.spec\.ts$/, dependencies: ["desktop-jobs"] },
