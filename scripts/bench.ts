@@ -21,6 +21,7 @@ import { travelerOperations } from "../lib/traveler/operations";
 import type { TravelerData } from "../lib/traveler/types";
 import { renderTravelerPdf } from "../components/traveler/render-traveler";
 import { runLoadSection } from "./bench-load";
+import { runLogSection } from "./bench-log";
 
 interface BenchCase {
   name: string;
@@ -193,6 +194,7 @@ async function main(): Promise<void> {
     );
   }
   if (failed) console.log("Some computations are over budget (FAIL above).");
+  await runLogSection();
   try {
     await runLoadSection();
   } catch (error) {

@@ -68,12 +68,20 @@ export function headerPressureUnit(header: string): LogPressureUnit | undefined 
   return LOG_PRESSURE_UNITS.find((u) => u.toLowerCase() === unit);
 }
 
+const NUMBER = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
+
 function number(cell: string | undefined, decimalComma: boolean): number {
-  if (cell === undefined) return Number.NaN;
-  const text = cell.trim();
-  if (text === "") return Number.NaN;
-  const normal = decimalComma ? text.replace(/\./g, "").replace(",", ".") : text;
-  return /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(normal) ? Number(normal) : Number.NaN;
+  if (cell === undefined || cell === "") return Number.NaN;
+  const normal = decimalComma ? cell.replace(/\./g, "").replace(",", ".") : cell;
+  // A quick Number() first: most cells are plain decimals; the pattern refuses "0x10", "Infinity" and the like.
+  const value = Number(normal);
+  return Number.isFinite(value) && NUMBER.test(normal) ? value : Number.NaN;
+}
+
+function sameRecord(a: readonly string[] | undefined, b: readonly string[]): boolean {
+  if (!a || a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
 }
 
 export interface LogReadResult {
@@ -107,15 +115,16 @@ export function columnIndex(headers: readonly string[], mapping: LogMapping): Re
  * are lib/engineering/air-fuel-log.ts's, on the rows returned.
  */
 export async function readLog(input: Readable, dialect: LogDialect, mapping: LogMapping): Promise<LogReadResult> {
-  const parser = input.pipe(
-    parse({ delimiter: dialect.delimiter, bom: true, relax_column_count: true, skip_empty_lines: false, trim: true, info: true }),
-  );
+  // One record per line (loggers do not quote newlines), so a record's line is its place in the file.
+  const parser = input.pipe(parse({ delimiter: dialect.delimiter, bom: true, relax_column_count: true, skip_empty_lines: false, trim: true }));
   const result: LogReadResult = { rows: [], rejected: [], skipped: { blank: 0, repeated: 0 }, totalRows: 0 };
   let index: ReturnType<typeof columnIndex> | undefined;
-  let previous: string | undefined;
+  let previous: string[] | undefined;
+  let line = 0;
   const scale = mapping.mixture.kind === "afr" ? (mapping.mixture.scale ?? "fuel") : undefined;
-  for await (const { record, info } of parser as AsyncIterable<{ record: string[]; info: { lines: number } }>) {
-    const line = info.lines;
+  const paPerUnit = toSI("pressure", 1, mapping.pressure.unit);
+  for await (const record of parser as AsyncIterable<string[]>) {
+    line++;
     if (!index) {
       index = columnIndex(record, mapping);
       continue;
@@ -125,12 +134,11 @@ export async function readLog(input: Readable, dialect: LogDialect, mapping: Log
       continue;
     }
     result.totalRows++;
-    const joined = record.join("\u0001");
-    if (joined === previous) {
+    if (sameRecord(previous, record)) {
       result.skipped.repeated++;
       continue;
     }
-    previous = joined;
+    previous = record;
     const cell = (i: number | undefined) => (i === undefined ? undefined : number(record[i], dialect.decimalComma));
     const pressure = cell(index.pressure) as number;
     const mixture = cell(index.mixture) as number;
@@ -149,7 +157,7 @@ export async function readLog(input: Readable, dialect: LogDialect, mapping: Log
     }
     result.rows.push({
       line,
-      manifold: { pa: toSI("pressure", pressure, mapping.pressure.unit), reference: mapping.pressure.reference },
+      manifold: { pa: pressure * paPerUnit, reference: mapping.pressure.reference },
       mixture: scale === undefined ? { kind: "lambda", value: mixture } : { kind: "afr", value: mixture, scale },
       rpm,
       throttlePct: throttle,
