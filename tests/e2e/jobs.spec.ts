@@ -143,6 +143,8 @@ test("an admin finds a customer and follows their jobs into the filtered table",
   await page.getByTestId("customer-row-Juniper Ashdown").getByRole("link", { name: /^\d+ jobs? →$/ }).click();
   await expect(page).toHaveURL(/\/jobs\?customer=[0-9a-f-]{36}$/);
   await expect(page.getByRole("search", { name: "Filter jobs" }).getByLabel("Customer")).toHaveValue(/[0-9a-f-]{36}/);
+  // The table reads the list in the browser: wait for the filtered rows before reading them all.
+  await expect(page.getByRole("table").locator("tbody tr td:nth-child(3)").first()).toHaveText("Juniper Ashdown");
   const customers = await page.getByRole("table").locator("tbody tr td:nth-child(3)").allTextContents();
   expect(customers.length).toBeGreaterThan(0);
   expect(new Set(customers)).toEqual(new Set(["Juniper Ashdown"]));
