@@ -1,4 +1,5 @@
-import type { SignalWord } from "@/components/ui/safety-note";
+/** The ANSI Z535 signal words, most serious first. */
+export type SignalWord = "DANGER" | "WARNING" | "CAUTION" | "NOTICE";
 
 export type HazardTopic = "grinding" | "drilling" | "fuel" | "pressurizedBowls" | "general";
 

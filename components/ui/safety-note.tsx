@@ -1,6 +1,8 @@
 import type { ReactNode } from "react";
 
-export type SignalWord = "DANGER" | "WARNING" | "CAUTION" | "NOTICE";
+import type { SignalWord } from "@/lib/safety";
+
+export type { SignalWord };
 
 // ANSI Z535 signal-word panels: red for DANGER, orange for WARNING, yellow for CAUTION, blue for NOTICE.
 const panels: Record<SignalWord, string> = {

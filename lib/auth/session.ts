@@ -3,6 +3,9 @@ import { getServerSession } from "next-auth";
 import { forbidden, redirect } from "next/navigation";
 import { getSessionHolder, type UserSummary } from "@/db/users";
 import type { UserRole } from "@/db/schema";
+
+// The roles as the layers above the data layer name them.
+export type { UserRole };
 import { authOptions } from "./options";
 
 export type SessionUser = UserSummary;
