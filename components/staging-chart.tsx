@@ -2,8 +2,8 @@
 
 import { CartesianGrid, ComposedChart, Line, ReferenceArea, ReferenceDot, ReferenceLine, Tooltip, XAxis, YAxis } from "recharts";
 import type { ThrottleMode } from "@/lib/engineering/staging";
-import { areaUnitLabel, areaValue, fixed, type DisplayLengthUnit } from "@/lib/display";
-import type { StagingChartDto, StagingValveDto } from "@/lib/staging-chart";
+import { areaUnitLabel, areaValue, fixed, type DisplayLengthUnit } from "@/lib/format/display";
+import type { StagingChartDto, StagingValveDto } from "@/lib/jobs/staging-chart";
 
 // SVG attributes take plain colours: these repeat the palette of app/globals.css (ink, accent, lean, rich,
 // rule, graphite). The ANSI safety colours are not used here.

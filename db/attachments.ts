@@ -1,7 +1,7 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
-import { SHOP_FLOOR_STATES } from "@/lib/job-states";
-import { RequestRefusal } from "@/lib/errors";
+import { SHOP_FLOOR_STATES } from "@/db/job-states";
+import { RequestRefusal } from "@/db/refusal";
 import { recordAudit } from "./audit";
 import { getDb } from "./client";
 import type { Viewer } from "./jobs";

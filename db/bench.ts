@@ -1,8 +1,8 @@
 import "server-only";
 import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import type { PlannedMeasurement } from "@/lib/engineering/conversion-plan";
-import { SHOP_FLOOR_STATES, type JobState } from "@/lib/job-states";
-import { RequestRefusal } from "@/lib/errors";
+import { SHOP_FLOOR_STATES, type JobState } from "@/db/job-states";
+import { RequestRefusal } from "@/db/refusal";
 import { recordAudit } from "./audit";
 import { getDb } from "./client";
 import { lockJob, type Viewer } from "./jobs";

@@ -1,7 +1,7 @@
 import "server-only";
 import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
 import { Pool } from "pg";
-import { getEnv } from "@/lib/env";
+import { getEnv } from "@/lib/server/env";
 import * as schema from "./schema";
 
 export type Database = NodePgDatabase<typeof schema>;

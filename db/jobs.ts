@@ -1,8 +1,8 @@
 import "server-only";
 import { and, asc, count, desc, eq, ilike, inArray, or, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
-import { SHOP_FLOOR_STATES, type JobState } from "@/lib/job-states";
-import { RequestRefusal } from "@/lib/errors";
+import { SHOP_FLOOR_STATES, type JobState } from "@/db/job-states";
+import { RequestRefusal } from "@/db/refusal";
 import { recordAudit } from "./audit";
 import { getDb, type Executor } from "./client";
 import { insertCustomer } from "./customers";

@@ -1,9 +1,9 @@
 import "server-only";
 import { and, asc, count, eq, inArray } from "drizzle-orm";
 import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
-import { canMove, type JobState } from "@/lib/job-states";
-import { planJob } from "@/lib/job-plan";
-import { RequestRefusal } from "@/lib/errors";
+import { canMove, type JobState } from "@/db/job-states";
+import { planJob } from "@/lib/jobs/plan";
+import { RequestRefusal } from "@/db/refusal";
 import { dangerWarnings } from "@/lib/engineering/plan-warnings";
 import { recordAudit } from "./audit";
 import { getDb, type Executor } from "./client";

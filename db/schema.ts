@@ -1,5 +1,5 @@
 import { sql } from "drizzle-orm";
-import { JOB_STATES, type JobState } from "../lib/job-states";
+import { JOB_STATES, type JobState } from "./job-states";
 import { boolean, doublePrecision, index, integer, jsonb, pgEnum, pgSequence, pgTable, text, timestamp, unique, uuid } from "drizzle-orm/pg-core";
 
 export const userRole = pgEnum("user_role", ["admin", "tuner", "machinist"]);

@@ -1,11 +1,11 @@
 import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
-import { benchUrl } from "@/lib/bench-url";
-import { RequestRefusal } from "@/lib/errors";
+import { benchUrl } from "@/lib/bench/url";
+import { RequestRefusal } from "@/db/refusal";
 import { fuelProperties } from "@/lib/engineering/fuels";
-import { fuelSpecOf } from "@/lib/job-plan";
-import { SHOP_FLOOR_STATES } from "@/lib/job-states";
+import { fuelSpecOf } from "@/lib/jobs/plan";
+import { SHOP_FLOOR_STATES } from "@/db/job-states";
 import { travelerOperations } from "@/lib/traveler/operations";
 import { travelerPlanNotes } from "@/lib/traveler/plan-notes";
 import type { TravelerData } from "@/lib/traveler/types";

@@ -3,7 +3,7 @@ import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { getDb, type Executor } from "./client";
 import { recordAudit } from "./audit";
 import { users, type UserRole } from "./schema";
-import { RequestRefusal } from "@/lib/errors";
+import { RequestRefusal } from "@/db/refusal";
 
 /** What the app may know about a user: never the password hash. */
 export interface UserSummary {

@@ -19,7 +19,7 @@ import { planConversion } from "../lib/engineering/conversion-plan";
 import { GASOLINE } from "../lib/engineering/fuels";
 import { travelerOperations } from "../lib/traveler/operations";
 import type { TravelerData } from "../lib/traveler/types";
-import { renderTravelerPdf } from "../components/traveler/render-traveler";
+import { renderTravelerPdf } from "../lib/traveler/pdf/render-traveler";
 import { runLoadSection } from "./bench-load";
 import { runLogSection } from "./bench-log";
 

@@ -3,7 +3,7 @@ import { requireRole, ALL_ROLES } from "@/lib/auth/session";
 import { navigationFor } from "@/components/navigation";
 import { PageHeader, Sheet } from "@/components/ui/sheet";
 import { SafetyNote } from "@/components/ui/safety-note";
-import { ALL_CAUTIONS } from "@/lib/safety";
+import { ALL_CAUTIONS } from "@/lib/safety/cautions";
 import type { UserRole } from "@/db/schema";
 
 const NEXT_STEP: Record<UserRole, { title: string; text: string }> = {

@@ -1,7 +1,7 @@
 "use client";
 
 import { startTransition, useActionState, type FormEvent } from "react";
-import type { FormResult } from "@/lib/form-action";
+import type { FormResult } from "@/lib/forms/form-action";
 
 type CalculatorAction<Data> = (previous: FormResult<Data> | undefined, formData: FormData) => Promise<FormResult<Data>>;
 

@@ -1,6 +1,6 @@
 import type { ReactNode } from "react";
 
-import type { SignalWord } from "@/lib/safety";
+import type { SignalWord } from "@/lib/safety/cautions";
 
 export type { SignalWord };
 

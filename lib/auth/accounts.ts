@@ -1,7 +1,7 @@
 import "server-only";
 import { createUser, DuplicateEmailError, updateUser, type UserSummary } from "@/db/users";
 import type { UserRole } from "@/db/schema";
-import { RequestRefusal } from "@/lib/errors";
+import { RequestRefusal } from "@/db/refusal";
 import { hashPassword } from "./credentials";
 import { refuseWeak } from "./passwords";
 

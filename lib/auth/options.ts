@@ -4,7 +4,7 @@ import CredentialsProvider from "next-auth/providers/credentials";
 import { z } from "zod";
 import { endSessions } from "@/db/users";
 import { safeCallbackPath } from "@/lib/http/safe-callback";
-import { getEnv } from "@/lib/env";
+import { getEnv } from "@/lib/server/env";
 import { clientAddress } from "./client-address";
 import { SignInRefused, verifyCredentials } from "./credentials";
 

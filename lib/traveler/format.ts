@@ -2,7 +2,7 @@
 // unit so that a column of figures lines up. Conversion factors are exact (NIST SP 811: 1 in = 25.4 mm,
 // 1 in³ = 16.387 064 cm³) or to NIST's seven figures (1 psi = 6894.757 Pa).
 
-import { fixed } from "@/lib/display";
+import { fixed } from "@/lib/format/display";
 
 const M_PER_IN = 0.0254;
 const PA_PER_PSI = 6894.757;

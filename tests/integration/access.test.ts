@@ -24,7 +24,7 @@ import { POST as uploadPhotoRoute } from "@/app/api/blocks/[blockId]/photos/rout
 import { GET as photoRoute } from "@/app/api/photos/[id]/route";
 import { signOffAction } from "@/app/bench/[blockId]/actions";
 import { GET as outboxAttachmentRoute } from "@/app/api/outbox/[name]/attachments/[index]/route";
-import { outboxDir } from "@/lib/outbox";
+import { outboxDir } from "@/lib/server/outbox";
 import { writeEml } from "./support/outbox";
 import { jobBody, makeJob } from "./support/jobs";
 import { ACTORS, actAs, formData, jsonRequest, resetDatabase, testDb, type Actor } from "./support/database";

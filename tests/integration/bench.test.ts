@@ -6,7 +6,7 @@ import { POST as signOffRoute } from "@/app/api/operations/[id]/sign-off/route";
 import { POST as uploadRoute } from "@/app/api/blocks/[blockId]/photos/route";
 import { GET as photoRoute } from "@/app/api/photos/[id]/route";
 import { POST as stateRoute } from "@/app/api/jobs/[id]/state/route";
-import { MAX_PHOTO_BYTES } from "@/lib/photos";
+import { MAX_PHOTO_BYTES } from "@/lib/server/images";
 import { actAs, jsonRequest, resetDatabase, testDb } from "./support/database";
 import { startMailFake, startS3Fake, type MailFake, type S3Fake } from "./support/fakes";
 import { makeJob } from "./support/jobs";

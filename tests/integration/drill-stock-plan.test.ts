@@ -3,8 +3,8 @@ import { beforeEach, describe, expect, it } from "vitest";
 import { createJob, saveJobBlocks, type JobFields, type Viewer } from "@/db/jobs";
 import { setDrillStocked } from "@/db/drill-stock";
 import { solveJob } from "@/db/revisions";
-import { createJobSchema } from "@/app/(office)/jobs/schema";
-import { jobColumns } from "@/lib/job-input";
+import { createJobSchema } from "@/lib/jobs/schema";
+import { jobColumns } from "@/lib/jobs/input";
 import { actAs, resetDatabase } from "./support/database";
 import { jobBody } from "./support/jobs";
 

@@ -8,7 +8,7 @@ import { afterEach, describe, expect, it } from "vitest";
 import { GET as healthRoute } from "@/app/api/health/route";
 import { databaseAnswers } from "@/db/health";
 import * as schema from "@/db/schema";
-import { healthResponse } from "@/lib/health";
+import { healthResponse } from "@/lib/server/health";
 
 const pools: Pool[] = [];
 const servers: Server[] = [];

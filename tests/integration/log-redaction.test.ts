@@ -2,8 +2,8 @@
 // e-mail address, no customer's details (the query's parameters stay out).
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { createUser } from "@/db/users";
-import { refusalResponse } from "@/lib/api";
-import { log } from "@/lib/log";
+import { refusalResponse } from "@/lib/http/api-route";
+import { log } from "@/lib/server/log";
 import { actAs, resetDatabase } from "./support/database";
 
 beforeEach(resetDatabase);

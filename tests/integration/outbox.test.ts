@@ -4,7 +4,7 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { afterAll, beforeEach, describe, expect, it } from "vitest";
 import { GET as attachmentRoute } from "@/app/api/outbox/[name]/attachments/[index]/route";
-import { getOutboxAttachment, getOutboxMessage, listOutbox, outboxDir } from "@/lib/outbox";
+import { getOutboxAttachment, getOutboxMessage, listOutbox, outboxDir } from "@/lib/server/outbox";
 import { actAs, resetDatabase } from "./support/database";
 import { emptyFolder, writeEml } from "./support/outbox";
 

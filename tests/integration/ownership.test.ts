@@ -5,7 +5,7 @@ import { beforeEach, describe, expect, it } from "vitest";
 import { POST as createJobRoute } from "@/app/api/jobs/route";
 import { PATCH as patchJobRoute } from "@/app/api/jobs/[id]/route";
 import { changeAccount, createAccount } from "@/lib/auth/accounts";
-import { RequestRefusal } from "@/lib/errors";
+import { RequestRefusal } from "@/db/refusal";
 import * as schema from "@/db/schema";
 import { actAs, jsonRequest, resetDatabase, testDb } from "./support/database";
 import { jobBody, makeJob } from "./support/jobs";

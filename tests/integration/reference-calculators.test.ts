@@ -9,7 +9,7 @@ import { restrictionAction } from "@/app/(office)/reference/calculators/restrict
 import { stagingAction } from "@/app/(office)/reference/calculators/staging/actions";
 import { passagePlugAction, tapDrillAction } from "@/app/(office)/reference/calculators/tap-drill/actions";
 import * as schema from "@/db/schema";
-import type { FormResult } from "@/lib/form-action";
+import type { FormResult } from "@/lib/forms/form-action";
 import { actAs, formData, resetDatabase, testDb } from "./support/database";
 import { nestedFormData } from "./support/form-fields";
 import {

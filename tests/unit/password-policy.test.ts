@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { MAX_PASSWORD_BYTES, passwordProblem } from "@/lib/password-policy";
+import { MAX_PASSWORD_BYTES, passwordProblem } from "@/lib/auth/password-policy";
 
 const person = { email: "odile.marsh@blockwright.test", name: "Odile Marsh" };
 

@@ -2,7 +2,7 @@
 
 import { redirect } from "next/navigation";
 import { resetPassword } from "@/lib/auth/passwords";
-import { runFormAction, type FormResult } from "@/lib/form-action";
+import { runFormAction, type FormResult } from "@/lib/forms/form-action";
 import { resetPasswordSchema } from "./schema";
 
 /** Anyone holding the link may use it, once: the link is the proof. */

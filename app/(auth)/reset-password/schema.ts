@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { newPasswordField } from "@/lib/password-policy";
+import { newPasswordField } from "@/lib/auth/password-policy";
 
 export const resetPasswordSchema = z
   .object({

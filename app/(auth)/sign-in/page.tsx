@@ -1,10 +1,10 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { getSessionUser } from "@/lib/auth/session";
-import { getEnv } from "@/lib/env";
+import { getEnv } from "@/lib/server/env";
 import { safeCallbackPath } from "@/lib/http/safe-callback";
 import { SafetyNote } from "@/components/ui/safety-note";
-import { SAFETY_CAUTIONS } from "@/lib/safety";
+import { SAFETY_CAUTIONS } from "@/lib/safety/cautions";
 import { SignInForm } from "./sign-in-form";
 
 export const metadata: Metadata = { title: "Sign in" };

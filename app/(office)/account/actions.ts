@@ -3,7 +3,7 @@
 import { redirect } from "next/navigation";
 import { changeOwnPassword, signOutEverywhere } from "@/lib/auth/passwords";
 import { ALL_ROLES } from "@/lib/auth/session";
-import { runFormAction, type FormResult } from "@/lib/form-action";
+import { runFormAction, type FormResult } from "@/lib/forms/form-action";
 import { changePasswordSchema, signOutEverywhereSchema } from "./schema";
 
 /** A new password ends every session, this one too: the person signs in again with it. */

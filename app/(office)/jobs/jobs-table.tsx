@@ -18,7 +18,7 @@ import type { JobListRow } from "@/db/jobs";
 import { Button } from "@/components/ui/button";
 import { Input, Select } from "@/components/ui/field";
 import { Tag } from "@/components/ui/sheet";
-import { JOB_STATE_LABELS, JOB_STATES, type JobState } from "@/lib/job-states";
+import { JOB_STATE_LABELS, JOB_STATES, type JobState } from "@/db/job-states";
 import {
   apiSearch,
   hasFilters,

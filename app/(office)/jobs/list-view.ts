@@ -1,4 +1,4 @@
-import { JOB_STATES, type JobState } from "@/lib/job-states";
+import { JOB_STATES, type JobState } from "@/db/job-states";
 
 // What the jobs table shows, kept in the page's address so a reload or a shared link opens the same view.
 // The names are those of GET /api/jobs; values that aren't valid (an unknown customer, page 0) are dropped.

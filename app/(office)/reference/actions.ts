@@ -3,7 +3,7 @@
 import { revalidatePath } from "next/cache";
 import { setLengthUnit } from "@/db/users";
 import { ALL_ROLES } from "@/lib/auth/session";
-import { runFormAction, type FormResult } from "@/lib/form-action";
+import { runFormAction, type FormResult } from "@/lib/forms/form-action";
 import { lengthUnitSchema } from "./schema";
 
 /** Remembers the signed-in user's inch/mm choice; every reference screen shows sizes in it. */

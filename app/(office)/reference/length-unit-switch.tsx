@@ -1,7 +1,7 @@
 "use client";
 
 import { useActionState } from "react";
-import type { DisplayLengthUnit } from "@/lib/display";
+import type { DisplayLengthUnit } from "@/lib/format/display";
 import { setLengthUnitAction } from "./actions";
 
 const CHOICES: { unit: DisplayLengthUnit; label: string; title: string }[] = [

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { PageHeader, Sheet } from "@/components/ui/sheet";
 import { SafetyNote } from "@/components/ui/safety-note";
 import { ALL_ROLES, requireRole } from "@/lib/auth/session";
-import { SAFETY_CAUTIONS } from "@/lib/safety";
+import { SAFETY_CAUTIONS } from "@/lib/safety/cautions";
 import { LengthUnitSwitch } from "./length-unit-switch";
 import { CALCULATORS, CHARTS, type ReferencePlace } from "./places";
 

@@ -1,4 +1,4 @@
-import { healthResponse } from "@/lib/health";
+import { healthResponse } from "@/lib/server/health";
 
 // Asked every few seconds by monitors: always a fresh check, never a build-time answer.
 export const dynamic = "force-dynamic";

@@ -1,5 +1,5 @@
 import { listUsers } from "@/db/users";
-import { apiRoute } from "@/lib/api";
+import { apiRoute } from "@/lib/http/api-route";
 import { createAccount } from "@/lib/auth/accounts";
 import { createUserSchema } from "@/app/(office)/shop/users/schema";
 

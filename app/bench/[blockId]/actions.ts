@@ -1,12 +1,12 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
-import type { JobState } from "@/lib/job-states";
+import type { JobState } from "@/db/job-states";
 import { ALL_ROLES } from "@/lib/auth/session";
-import { signOffFromBench } from "@/lib/bench-sign-off";
-import { RequestRefusal } from "@/lib/errors";
-import { runFormAction, type FormResult } from "@/lib/form-action";
-import { signOffSchema, type SignOffInput } from "./schema";
+import { signOffFromBench } from "@/lib/bench/sign-off";
+import { RequestRefusal } from "@/db/refusal";
+import { runFormAction, type FormResult } from "@/lib/forms/form-action";
+import { signOffSchema, type SignOffInput } from "@/lib/bench/sign-off-schema";
 
 export interface SignOffResult {
   /** False when the operation was already signed (another phone, a retry): nothing was recorded twice. */

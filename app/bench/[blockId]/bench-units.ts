@@ -2,7 +2,7 @@
 // tolerance in the unit they chose, and the total area of gauged restriction holes. The server converts
 // again with lib/engineering/units (mathjs) and decides; what the phone shows is a preview of that.
 
-import { BENCH_LENGTH_UNITS, BENCH_PRESSURE_UNITS } from "./schema";
+import { BENCH_LENGTH_UNITS, BENCH_PRESSURE_UNITS } from "@/lib/bench/sign-off-schema";
 
 export type BenchLengthUnit = (typeof BENCH_LENGTH_UNITS)[number];
 export type BenchPressureUnit = (typeof BENCH_PRESSURE_UNITS)[number];

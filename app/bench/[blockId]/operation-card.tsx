@@ -6,8 +6,8 @@ import { startTransition, useActionState, useState, type FormEvent } from "react
 import type { z } from "zod";
 import type { BenchOperation } from "@/db/bench";
 import { SafetyNote } from "@/components/ui/safety-note";
-import type { FormResult } from "@/lib/form-action";
-import type { SafetyCaution } from "@/lib/safety";
+import type { FormResult } from "@/lib/forms/form-action";
+import type { SafetyCaution } from "@/lib/safety/cautions";
 import { signOffAction, type SignOffResult } from "./actions";
 import {
   defaultUnit,
@@ -25,7 +25,7 @@ import {
 import { LocalTime } from "./local-time";
 import { visibleParameters } from "./operation-terms";
 import { PhotoControl } from "./photo-control";
-import { signOffSchema, type SignOffInput } from "./schema";
+import { signOffSchema, type SignOffInput } from "@/lib/bench/sign-off-schema";
 
 type Planned = BenchOperation["planned"][number];
 

@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useId, useState, type ChangeEvent } from "react";
-import { PHOTO_ACCEPT } from "@/lib/photo-formats";
+import { PHOTO_ACCEPT } from "@/lib/bench/photo-formats";
 
 type Upload = { state: "idle" } | { state: "sending"; percent: number } | { state: "failed"; message: string };
 

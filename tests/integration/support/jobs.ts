@@ -1,8 +1,8 @@
 // Job fixtures for the integration tests, in the API's own terms ({ value, unit } quantities).
 import { createJob, saveJobBlocks, type Viewer } from "@/db/jobs";
 import { approveRevision, changeJobState } from "@/db/revisions";
-import { blockColumns, jobColumns } from "@/lib/job-input";
-import { createJobSchema, jobBlocksSchema } from "@/app/(office)/jobs/schema";
+import { blockColumns, jobColumns } from "@/lib/jobs/input";
+import { createJobSchema, jobBlocksSchema } from "@/lib/jobs/schema";
 import type { JobFields } from "@/db/jobs";
 import { and, eq } from "drizzle-orm";
 import * as schema from "@/db/schema";

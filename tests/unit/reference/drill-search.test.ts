@@ -1,6 +1,6 @@
 // The drill chart's search box: labels and sizes a shop types, against ASME B94.11M sizes.
 import { describe, expect, it } from "vitest";
-import { drillDto } from "@/lib/calc-dto";
+import { drillDto } from "@/lib/format/quantity-pairs";
 import { ALL_DRILLS } from "@/lib/engineering/drills";
 import { searchDrills } from "@/app/(office)/reference/drills/drill-search";
 

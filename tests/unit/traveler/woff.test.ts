@@ -2,7 +2,7 @@ import { readFileSync } from "node:fs";
 import path from "node:path";
 import * as fontkit from "fontkit";
 import { describe, expect, it } from "vitest";
-import { woffToSfnt } from "@/components/traveler/woff";
+import { woffToSfnt } from "@/lib/traveler/pdf/woff";
 
 // The unpacked font is checked against fontkit reading the WOFF itself: an independent WOFF decoder.
 const FONTS = ["Inter-400.woff", "Inter-700.woff", "DMMono-400.woff", "DMMono-500.woff"];

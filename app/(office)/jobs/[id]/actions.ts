@@ -3,10 +3,10 @@
 import { revalidatePath } from "next/cache";
 import { chooseStageLayout } from "@/db/jobs";
 import { OFFICE_ROLES } from "@/lib/auth/session";
-import { runFormAction, type FormResult } from "@/lib/form-action";
-import { moveJob } from "@/lib/job-moves";
-import { JOB_STATE_LABELS } from "@/lib/job-states";
-import { jobStateChangeSchema, stageChoiceSchema } from "../schema";
+import { runFormAction, type FormResult } from "@/lib/forms/form-action";
+import { moveJob } from "@/lib/jobs/moves";
+import { JOB_STATE_LABELS } from "@/db/job-states";
+import { jobStateChangeSchema, stageChoiceSchema } from "@/lib/jobs/schema";
 import { requireVisibleJob } from "./job-guard";
 
 // The job page's own actions: the tuner's pick among the hole layouts, and the moves between states.

@@ -1,7 +1,7 @@
 import "server-only";
 import { getJob, type Viewer } from "@/db/jobs";
-import { RequestRefusal } from "@/lib/errors";
-import { parseIdParam } from "@/lib/route-params";
+import { RequestRefusal } from "@/db/refusal";
+import { parseIdParam } from "@/lib/http/route-params";
 
 /** The job's id when it exists and the viewer may see it; a 404 refusal otherwise. */
 export async function requireVisibleJob(viewer: Viewer, jobId: string): Promise<string> {

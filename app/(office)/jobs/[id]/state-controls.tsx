@@ -3,8 +3,8 @@
 import { useActionState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/field";
-import type { FormResult } from "@/lib/form-action";
-import type { JobState } from "@/lib/job-states";
+import type { FormResult } from "@/lib/forms/form-action";
+import type { JobState } from "@/db/job-states";
 
 export interface StateMove {
   to: JobState;

@@ -1,4 +1,4 @@
-import type { JobState } from "@/lib/job-states";
+import type { JobState } from "@/db/job-states";
 import type { StateMove } from "./state-controls";
 
 /** The moves the office makes from the job page; the bench moves a job into and out of machining itself. */

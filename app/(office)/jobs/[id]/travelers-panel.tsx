@@ -2,7 +2,7 @@ import "server-only";
 import Link from "next/link";
 import { Sheet } from "@/components/ui/sheet";
 import { TravelerDownloadButton } from "@/components/traveler-download-button";
-import { benchPath } from "@/lib/bench-url";
+import { benchPath } from "@/lib/bench/url";
 
 /** One printed traveler per metering block of the current revision, and the bench page each one's QR code opens. */
 export function TravelersPanel({ revision, blocks }: { revision: number; blocks: { id: string; side: "primary" | "secondary" }[] }) {

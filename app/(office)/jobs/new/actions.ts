@@ -3,10 +3,10 @@
 import { redirect } from "next/navigation";
 import { createJob, type JobFields } from "@/db/jobs";
 import { OFFICE_ROLES } from "@/lib/auth/session";
-import { RequestRefusal } from "@/lib/errors";
-import { runFormAction, type FormResult } from "@/lib/form-action";
-import { jobColumns } from "@/lib/job-input";
-import { createJobSchema } from "../schema";
+import { RequestRefusal } from "@/db/refusal";
+import { runFormAction, type FormResult } from "@/lib/forms/form-action";
+import { jobColumns } from "@/lib/jobs/input";
+import { createJobSchema } from "@/lib/jobs/schema";
 
 export type CreateJobResult = FormResult<{ id: string; number: string }>;
 

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { Sheet } from "@/components/ui/sheet";
 import { SafetyNote } from "@/components/ui/safety-note";
 import { ALL_ROLES, requireRole } from "@/lib/auth/session";
-import { SAFETY_CAUTIONS } from "@/lib/safety";
+import { SAFETY_CAUTIONS } from "@/lib/safety/cautions";
 import { CALCULATORS } from "../places";
 
 export const metadata: Metadata = { title: "Calculators" };

@@ -1,5 +1,5 @@
 import "server-only";
-import { RequestRefusal } from "@/lib/errors";
+import { RequestRefusal } from "@/db/refusal";
 
 /**
  * Runs a computation and turns its RangeError (an input the trade functions refuse) into a 400 the form

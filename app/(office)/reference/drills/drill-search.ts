@@ -1,4 +1,4 @@
-import type { DrillDto } from "@/lib/calc-dto";
+import type { DrillDto } from "@/lib/format/quantity-pairs";
 import type { DrillSystem } from "@/lib/engineering/types";
 
 // Which drills a search box means. A shop types a label ("43", "#43", "q", "1/8", "2.5 mm") or a size

@@ -1,4 +1,4 @@
-import { drillDto, lengthPair, tidy, type DrillDto, type LengthPair } from "@/lib/calc-dto";
+import { drillDto, lengthPair, tidy, type DrillDto, type LengthPair } from "@/lib/format/quantity-pairs";
 import { ALL_THREADS, clearanceDrill, tapDrill, type Thread, type ThreadSystem } from "@/lib/engineering/threads";
 
 /** One line of the tap-drill chart: a thread, its 75 % tap drill and its clearance drills. */

@@ -3,8 +3,8 @@
 import { revalidatePath } from "next/cache";
 import { createCustomer, updateCustomer } from "@/db/customers";
 import { OFFICE_ROLES } from "@/lib/auth/session";
-import { RequestRefusal } from "@/lib/errors";
-import { runFormAction, type FormResult } from "@/lib/form-action";
+import { RequestRefusal } from "@/db/refusal";
+import { runFormAction, type FormResult } from "@/lib/forms/form-action";
 import { customerSchema, updateCustomerSchema } from "./schema";
 
 // Tuners open jobs for new customers themselves, so they may keep the customer list too; machinists may not.

@@ -4,7 +4,7 @@ import { revalidatePath } from "next/cache";
 import { setDrillStocked, setSystemStocked } from "@/db/drill-stock";
 import { updateShopSettings } from "@/db/shop-settings";
 import { toSI } from "@/lib/engineering/units";
-import { runFormAction, type FormResult } from "@/lib/form-action";
+import { runFormAction, type FormResult } from "@/lib/forms/form-action";
 import { drillStockSchema, drillSystemStockSchema, shopLimitsSchema } from "./schema";
 
 // Only an admin changes the rack and the restriction limits. The solver reads both afresh for every plan, so

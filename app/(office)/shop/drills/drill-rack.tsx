@@ -2,7 +2,7 @@
 
 import { useMemo, useOptimistic, useState, useTransition } from "react";
 import type { DrillSystem } from "@/lib/engineering/types";
-import type { FormResult } from "@/lib/form-action";
+import type { FormResult } from "@/lib/forms/form-action";
 import { Button } from "@/components/ui/button";
 import { Sheet } from "@/components/ui/sheet";
 import { setDrillStockedAction, setDrillSystemStockedAction } from "./actions";

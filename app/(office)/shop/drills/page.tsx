@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { listStockedLabels } from "@/db/drill-stock";
 import { getShopSettings } from "@/db/shop-settings";
 import { OFFICE_ROLES, requireRole } from "@/lib/auth/session";
-import { fixed } from "@/lib/display";
+import { fixed } from "@/lib/format/display";
 import { ALL_DRILLS, findDrill } from "@/lib/engineering/drills";
 import {
   DEFAULT_LARGEST_RESTRICTION_DRILL_LABEL,

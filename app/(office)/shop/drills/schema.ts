@@ -1,8 +1,8 @@
 import { z } from "zod";
 import { ALL_DRILLS } from "@/lib/engineering/drills";
 import { DEFAULT_LARGEST_RESTRICTION_DRILL_LABEL, DEFAULT_SMALLEST_RESTRICTION_DRILL_LABEL } from "@/lib/engineering/restriction-limits";
-import { optionalFormQuantity } from "@/lib/form-schema";
-import { FORM_LENGTH_UNITS } from "@/lib/form-units";
+import { optionalFormQuantity } from "@/lib/forms/form-schema";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
 
 // Changes to the drill rack: one drill by its label, or a whole series at once.
 

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { PageHeader, Sheet } from "@/components/ui/sheet";
 import { Table, Td, Th } from "@/components/ui/table";
 import { requireRole } from "@/lib/auth/session";
-import { listOutbox, outboxDir } from "@/lib/outbox";
+import { listOutbox, outboxDir } from "@/lib/server/outbox";
 import { formatBytes, formatSent, outboxHref } from "./format";
 
 export const metadata: Metadata = { title: "Outbox" };

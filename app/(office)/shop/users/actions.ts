@@ -2,7 +2,7 @@
 
 import { revalidatePath } from "next/cache";
 import { changeAccount, createAccount } from "@/lib/auth/accounts";
-import { runFormAction, type FormResult } from "@/lib/form-action";
+import { runFormAction, type FormResult } from "@/lib/forms/form-action";
 import { sendPasswordReset } from "@/lib/auth/passwords";
 import { createUserSchema, sendResetLinkSchema, updateUserSchema } from "./schema";
 

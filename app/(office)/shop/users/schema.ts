@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { formText } from "@/lib/form-schema";
-import { newPasswordField, refusePersonalPassword } from "@/lib/password-policy";
+import { formText } from "@/lib/forms/form-schema";
+import { newPasswordField, refusePersonalPassword } from "@/lib/auth/password-policy";
 
 const roleSchema = z.enum(["admin", "tuner", "machinist"], { error: "Choose a role: admin, tuner or machinist." });
 

@@ -1,8 +1,8 @@
 import { z } from "zod";
-import { apiRoute } from "@/lib/api";
+import { apiRoute } from "@/lib/http/api-route";
 import { changeOwnPassword } from "@/lib/auth/passwords";
 import { ALL_ROLES } from "@/lib/auth/session";
-import { newPasswordField } from "@/lib/password-policy";
+import { newPasswordField } from "@/lib/auth/password-policy";
 
 const bodySchema = z
   .object({

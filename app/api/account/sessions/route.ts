@@ -1,4 +1,4 @@
-import { apiRoute } from "@/lib/api";
+import { apiRoute } from "@/lib/http/api-route";
 import { signOutEverywhere } from "@/lib/auth/passwords";
 import { ALL_ROLES } from "@/lib/auth/session";
 

@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { apiRoute } from "@/lib/api";
-import { drillDto } from "@/lib/calc-dto";
+import { apiRoute } from "@/lib/http/api-route";
+import { drillDto } from "@/lib/format/quantity-pairs";
 import { ALL_DRILLS, DRILL_SYSTEMS } from "@/lib/engineering/drills";
 
 const querySchema = z.object({

@@ -1,4 +1,4 @@
-import { calculatorRoute } from "@/lib/api";
+import { calculatorRoute } from "@/lib/http/api-route";
 import { computeGrind } from "@/app/(office)/reference/calculators/grind/compute";
 import { grindSchema } from "@/app/(office)/reference/calculators/grind/schema";
 

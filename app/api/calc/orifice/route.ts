@@ -1,10 +1,10 @@
 import { z } from "zod";
-import { apiError, apiRoute } from "@/lib/api";
-import { areaIn2, areaMm2, tidy } from "@/lib/calc-dto";
+import { apiError, apiRoute } from "@/lib/http/api-route";
+import { areaIn2, areaMm2, tidy } from "@/lib/format/quantity-pairs";
 import { fuelProperties } from "@/lib/engineering/fuels";
 import { areaFromMassFlow, diameterForArea } from "@/lib/engineering/orifice";
 import { fromSI, toSI } from "@/lib/engineering/units";
-import { flowUnitSchema, fuelDensity, fuelSchema, isMassFlowUnit, positiveNumber, positiveQuantity, pressureUnitSchema } from "@/lib/quantity-schema";
+import { flowUnitSchema, fuelDensity, fuelSchema, isMassFlowUnit, positiveNumber, positiveQuantity, pressureUnitSchema } from "@/lib/forms/quantity-schema";
 
 const bodySchema = z
   .object({

@@ -1,10 +1,10 @@
 import { z } from "zod";
-import { calculatorRoute } from "@/lib/api";
+import { calculatorRoute } from "@/lib/http/api-route";
 import { ALL_THREADS } from "@/lib/engineering/threads";
 import { toSI } from "@/lib/engineering/units";
-import { formQuantity } from "@/lib/form-schema";
-import { FORM_LENGTH_UNITS } from "@/lib/form-units";
-import { drillList, threadList } from "@/lib/quantity-schema";
+import { formQuantity } from "@/lib/forms/form-schema";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
+import { drillList, threadList } from "@/lib/forms/quantity-schema";
 import { planPassagePlug } from "@/app/(office)/reference/calculators/tap-drill/compute";
 import { engagementSchema } from "@/app/(office)/reference/calculators/tap-drill/schema";
 

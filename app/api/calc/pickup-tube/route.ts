@@ -1,4 +1,4 @@
-import { calculatorRoute } from "@/lib/api";
+import { calculatorRoute } from "@/lib/http/api-route";
 import { computePickupTube } from "@/app/(office)/reference/calculators/pickup-tube/compute";
 import { pickupTubeSchema } from "@/app/(office)/reference/calculators/pickup-tube/schema";
 

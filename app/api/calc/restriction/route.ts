@@ -1,11 +1,11 @@
 import { z } from "zod";
-import { apiRoute } from "@/lib/api";
-import { areaIn2, drillDto, tidy } from "@/lib/calc-dto";
+import { apiRoute } from "@/lib/http/api-route";
+import { areaIn2, drillDto, tidy } from "@/lib/format/quantity-pairs";
 import { ALL_DRILLS } from "@/lib/engineering/drills";
 import { MAX_HOLES_PER_CHANNEL, solveHoleLayout } from "@/lib/engineering/hole-layout";
 import { DEFAULT_RESTRICTION_DRILL_LIMITS } from "@/lib/engineering/restriction-limits";
 import { toSI } from "@/lib/engineering/units";
-import { drillList, nonNegativeNumber, positiveNumber } from "@/lib/quantity-schema";
+import { drillList, nonNegativeNumber, positiveNumber } from "@/lib/forms/quantity-schema";
 
 const bodySchema = z
   .object({

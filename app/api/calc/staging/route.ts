@@ -1,4 +1,4 @@
-import { calculatorRoute } from "@/lib/api";
+import { calculatorRoute } from "@/lib/http/api-route";
 import { computeStaging } from "@/app/(office)/reference/calculators/staging/compute";
 import { stagingSchema } from "@/app/(office)/reference/calculators/staging/schema";
 

@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { apiRoute, invalidInput } from "@/lib/api";
-import { drillDto, tidy } from "@/lib/calc-dto";
+import { apiRoute, invalidInput } from "@/lib/http/api-route";
+import { drillDto, tidy } from "@/lib/format/quantity-pairs";
 import { parseThread, tapDrill } from "@/lib/engineering/threads";
 import { engagementSchema } from "@/app/(office)/reference/calculators/tap-drill/schema";
 import { fromSI } from "@/lib/engineering/units";

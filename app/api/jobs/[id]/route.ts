@@ -1,10 +1,10 @@
 import { z } from "zod";
 import { getJob, saveJobBlocks, updateJob } from "@/db/jobs";
-import { apiError, apiRoute, invalidInput } from "@/lib/api";
+import { apiError, apiRoute, invalidInput } from "@/lib/http/api-route";
 import { ALL_ROLES, OFFICE_ROLES } from "@/lib/auth/session";
-import { blockColumns, jobColumns } from "@/lib/job-input";
-import { idParams } from "@/lib/route-params";
-import { jobBlocksSchema, jobFieldsSchema, requireOneAmbient } from "@/app/(office)/jobs/schema";
+import { blockColumns, jobColumns } from "@/lib/jobs/input";
+import { idParams } from "@/lib/http/route-params";
+import { jobBlocksSchema, jobFieldsSchema, requireOneAmbient } from "@/lib/jobs/schema";
 import { jobDto } from "./job-dto";
 
 export const GET = apiRoute({ roles: ALL_ROLES, params: idParams("id") }, async ({ user, params }) => {

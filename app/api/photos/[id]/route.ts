@@ -1,10 +1,10 @@
 import { z } from "zod";
 import { getAttachment } from "@/db/attachments";
-import { apiError, apiRoute } from "@/lib/api";
+import { apiError, apiRoute } from "@/lib/http/api-route";
 import { ALL_ROLES } from "@/lib/auth/session";
-import { photoDisposition, thumbnailKeyOf } from "@/lib/photo-upload";
-import { getObject } from "@/lib/storage";
-import { idParams } from "@/lib/route-params";
+import { photoDisposition, thumbnailKeyOf } from "@/lib/bench/photo-upload";
+import { getObject } from "@/lib/server/storage";
+import { idParams } from "@/lib/http/route-params";
 
 const querySchema = z.object({ size: z.enum(["full", "thumb"], { error: "size must be full or thumb" }).default("full") });
 

@@ -1,7 +1,7 @@
 import { z } from "zod";
-import { apiRoute } from "@/lib/api";
+import { apiRoute } from "@/lib/http/api-route";
 import { changeAccount } from "@/lib/auth/accounts";
-import { idParams } from "@/lib/route-params";
+import { idParams } from "@/lib/http/route-params";
 
 const patchSchema = z
   .object({

@@ -1,6 +1,6 @@
 import "server-only";
 import type { StagingBalance } from "@/lib/engineering/staging";
-import type { DisplayLengthUnit } from "@/lib/display";
+import type { DisplayLengthUnit } from "@/lib/format/display";
 import { Table, Td, Th } from "@/components/ui/table";
 import { area, manifold, percent } from "./format";
 

@@ -1,7 +1,7 @@
 import "server-only";
 import type { BlockPlan, PlannedOperation } from "@/lib/engineering/conversion-plan";
-import type { DisplayLengthUnit } from "@/lib/display";
-import { SAFETY_CAUTIONS } from "@/lib/safety";
+import type { DisplayLengthUnit } from "@/lib/format/display";
+import { SAFETY_CAUTIONS } from "@/lib/safety/cautions";
 import { Fact, Facts } from "./facts";
 import { length, psi } from "./format";
 

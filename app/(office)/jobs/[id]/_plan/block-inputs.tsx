@@ -1,6 +1,6 @@
 import "server-only";
 import type { BlockRow } from "@/db/jobs";
-import type { DisplayLengthUnit } from "@/lib/display";
+import type { DisplayLengthUnit } from "@/lib/format/display";
 import { circleArea } from "@/lib/engineering/orifice";
 import { Fact, Facts } from "./facts";
 import { area, length } from "./format";

@@ -1,6 +1,6 @@
 import "server-only";
 import type { BlockRow } from "@/db/jobs";
-import type { DisplayLengthUnit } from "@/lib/display";
+import type { DisplayLengthUnit } from "@/lib/format/display";
 import { Sheet } from "@/components/ui/sheet";
 import { BlockInputs } from "./block-inputs";
 import { targetText, valveText } from "./stage-terms";

@@ -1,8 +1,8 @@
 import "server-only";
 import type { Job } from "@/db/schema";
-import type { DisplayLengthUnit } from "@/lib/display";
+import type { DisplayLengthUnit } from "@/lib/format/display";
 import { FUEL_KIND_LABELS, fuelProperties } from "@/lib/engineering/fuels";
-import { fuelSpecOf } from "@/lib/job-plan";
+import { fuelSpecOf } from "@/lib/jobs/plan";
 import { fromSI, STANDARD_ATMOSPHERE_PA } from "@/lib/engineering/units";
 import { Fact, Facts } from "./facts";
 import { displacement, percent, power, psi, temperature } from "./format";

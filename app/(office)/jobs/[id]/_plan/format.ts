@@ -1,6 +1,6 @@
 import "server-only";
-import { areaPair, lengthPair } from "@/lib/calc-dto";
-import { fixed, formatArea, formatLength, type DisplayLengthUnit } from "@/lib/display";
+import { areaPair, lengthPair } from "@/lib/format/quantity-pairs";
+import { fixed, formatArea, formatLength, type DisplayLengthUnit } from "@/lib/format/display";
 import { fromSI, PA_PER_INHG } from "@/lib/engineering/units";
 
 // Figures of the job pages, formatted on the server from SI. Fixed decimals per unit so that columns of

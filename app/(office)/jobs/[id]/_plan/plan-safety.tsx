@@ -1,7 +1,7 @@
 import "server-only";
 import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
 import { SafetyNote } from "@/components/ui/safety-note";
-import { SAFETY_CAUTIONS, type HazardTopic } from "@/lib/safety";
+import { SAFETY_CAUTIONS, type HazardTopic } from "@/lib/safety/cautions";
 
 // Strongest signal first: DANGER, then WARNING, then CAUTION.
 const ORDER: HazardTopic[] = ["fuel", "pressurizedBowls", "grinding", "drilling"];

@@ -1,7 +1,7 @@
 import "server-only";
 import type { BlockRow } from "@/db/jobs";
 import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
-import type { DisplayLengthUnit } from "@/lib/display";
+import type { DisplayLengthUnit } from "@/lib/format/display";
 import { Table, Td, Th } from "@/components/ui/table";
 import { area, drillSize, inHg, psi, signedPercent } from "./format";
 

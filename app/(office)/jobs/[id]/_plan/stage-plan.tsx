@@ -1,8 +1,8 @@
 import "server-only";
 import type { StageRow } from "@/db/jobs";
 import type { SolvedStage } from "@/lib/engineering/conversion-plan";
-import type { DisplayLengthUnit } from "@/lib/display";
-import type { FormResult } from "@/lib/form-action";
+import type { DisplayLengthUnit } from "@/lib/format/display";
+import type { FormResult } from "@/lib/forms/form-action";
 import { Tag } from "@/components/ui/sheet";
 import { Table, Td, Th } from "@/components/ui/table";
 import { areaBoth, drillSize, signedPercent } from "./format";

@@ -1,6 +1,6 @@
 import "server-only";
 import type { StageRow } from "@/db/jobs";
-import type { DisplayLengthUnit } from "@/lib/display";
+import type { DisplayLengthUnit } from "@/lib/format/display";
 import { area, inHg, psi } from "./format";
 
 // A stage described the way the tuner gave it.

@@ -1,7 +1,7 @@
 import "server-only";
 import type { BlockRow } from "@/db/jobs";
 import { STAGING_BAND, STAGING_CHART_VACUUM_PA, STAGING_SWEEP_POINTS, type ConversionPlan } from "@/lib/engineering/conversion-plan";
-import { stagingChartData, type StagingChartDto } from "@/lib/staging-chart";
+import { stagingChartData, type StagingChartDto } from "@/lib/jobs/staging-chart";
 
 /** Short marks for the valves: P1, P2 … on the primary, S1 … on the secondary, in opening order per block. */
 export function valveMarks(blocks: readonly BlockRow[]): Map<string, string> {

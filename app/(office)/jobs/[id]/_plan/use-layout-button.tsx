@@ -2,7 +2,7 @@
 
 import { useActionState } from "react";
 import { Button } from "@/components/ui/button";
-import type { FormResult } from "@/lib/form-action";
+import type { FormResult } from "@/lib/forms/form-action";
 
 /** "Use this layout" for one candidate: records the tuner's pick on the server. */
 export function UseLayoutButton({

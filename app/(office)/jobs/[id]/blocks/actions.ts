@@ -4,9 +4,9 @@ import { redirect } from "next/navigation";
 import { revalidatePath } from "next/cache";
 import { saveJobBlocks } from "@/db/jobs";
 import { OFFICE_ROLES } from "@/lib/auth/session";
-import { runFormAction, type FormResult } from "@/lib/form-action";
-import { blockColumns } from "@/lib/job-input";
-import { jobBlocksSchema } from "../../schema";
+import { runFormAction, type FormResult } from "@/lib/forms/form-action";
+import { blockColumns } from "@/lib/jobs/input";
+import { jobBlocksSchema } from "@/lib/jobs/schema";
 import { requireVisibleJob } from "../job-guard";
 
 /**

@@ -4,9 +4,9 @@ import { redirect } from "next/navigation";
 import { revalidatePath } from "next/cache";
 import { updateJob } from "@/db/jobs";
 import { OFFICE_ROLES } from "@/lib/auth/session";
-import { runFormAction, type FormResult } from "@/lib/form-action";
-import { jobColumns } from "@/lib/job-input";
-import { updateJobSchema } from "../../schema";
+import { runFormAction, type FormResult } from "@/lib/forms/form-action";
+import { jobColumns } from "@/lib/jobs/input";
+import { updateJobSchema } from "@/lib/jobs/schema";
 import { requireVisibleJob } from "../job-guard";
 
 /**

@@ -1,6 +1,6 @@
 import "server-only";
 import type { Job } from "@/db/schema";
-import type { DisplayLengthUnit } from "@/lib/display";
+import type { DisplayLengthUnit } from "@/lib/format/display";
 import { fromSI } from "@/lib/engineering/units";
 import type { JobFieldsForm } from "../../job-fields-shape";
 

@@ -8,7 +8,7 @@ import { SelectField } from "@/components/forms/select-field";
 import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { Field, FormMessage, Input, Textarea } from "@/components/ui/field";
-import type { FormResult } from "@/lib/form-action";
+import type { FormResult } from "@/lib/forms/form-action";
 import { CheckboxField } from "@/components/forms/checkbox-field";
 import { BOOST_UNITS, DISPLACEMENT_UNITS, FUEL_OPTIONS, POWER_UNITS, TEMPERATURE_UNITS, type JobFieldsForm } from "../../job-fields-shape";
 import { SiteFields } from "../../site-fields";

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { getJob } from "@/db/jobs";
 import { OFFICE_ROLES, requireRole } from "@/lib/auth/session";
-import { parseIdParam } from "@/lib/route-params";
+import { parseIdParam } from "@/lib/http/route-params";
 import { PageHeader, Sheet } from "@/components/ui/sheet";
 import { RevisionNotice } from "../revision-notice";
 import { updateJobAction } from "./actions";

@@ -1,5 +1,5 @@
 import "server-only";
-import { lengthPair, type LengthPair } from "@/lib/calc-dto";
+import { lengthPair, type LengthPair } from "@/lib/format/quantity-pairs";
 import { planGrind } from "@/lib/engineering/grind-plan";
 import { toSI } from "@/lib/engineering/units";
 import { refuseOutOfRange } from "../refusal";

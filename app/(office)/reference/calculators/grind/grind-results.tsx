@@ -1,6 +1,6 @@
 import { Reading, Readings, ResultPanel } from "@/components/forms/readings";
 import { Table, Td, Th } from "@/components/ui/table";
-import { formatLength, lengthNumber, type DisplayLengthUnit } from "@/lib/display";
+import { formatLength, lengthNumber, type DisplayLengthUnit } from "@/lib/format/display";
 import type { GrindResultDto } from "./compute";
 
 export function GrindResults({ result, unit }: { result: GrindResultDto; unit: DisplayLengthUnit }) {

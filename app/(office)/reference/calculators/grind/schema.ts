@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { formQuantity, formWholeNumber } from "@/lib/form-schema";
-import { FORM_LENGTH_UNITS } from "@/lib/form-units";
+import { formQuantity, formWholeNumber } from "@/lib/forms/form-schema";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
 
 const zeroOrMore = { min: 0, minInclusive: true } as const;
 

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { Sheet } from "@/components/ui/sheet";
 import { SafetyNote } from "@/components/ui/safety-note";
 import { ALL_ROLES, requireRole } from "@/lib/auth/session";
-import { SAFETY_CAUTIONS } from "@/lib/safety";
+import { SAFETY_CAUTIONS } from "@/lib/safety/cautions";
 import { PickupTubeForm } from "./pickup-tube-form";
 
 export const metadata: Metadata = { title: "Pickup tube" };

@@ -8,8 +8,8 @@ import { QuantityField } from "@/components/forms/quantity-field";
 import { Reading, Readings, ResultPanel, ResultPending } from "@/components/forms/readings";
 import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button } from "@/components/ui/button";
-import { formatLength, type DisplayLengthUnit } from "@/lib/display";
-import { FORM_LENGTH_UNITS } from "@/lib/form-units";
+import { formatLength, type DisplayLengthUnit } from "@/lib/format/display";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
 import { pickupTubeAction } from "./actions";
 import { pickupTubeSchema } from "./schema";
 

@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { formNumber, formQuantity, optionalFormQuantity } from "@/lib/form-schema";
-import { FORM_LENGTH_UNITS } from "@/lib/form-units";
+import { formNumber, formQuantity, optionalFormQuantity } from "@/lib/forms/form-schema";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
 
 const zeroOrMore = { min: 0, minInclusive: true } as const;
 const angle = (label: string) => formNumber(label, { min: -180, minInclusive: true, max: 180 });

@@ -1,7 +1,7 @@
 "use server";
 
 import { ALL_ROLES } from "@/lib/auth/session";
-import { runFormAction, type FormResult } from "@/lib/form-action";
+import { runFormAction, type FormResult } from "@/lib/forms/form-action";
 import { computeRestriction, type RestrictionResultDto } from "./compute";
 import { restrictionSchema } from "./schema";
 

@@ -1,5 +1,5 @@
 import "server-only";
-import { areaPair, drillDto, tidy, type AreaPair, type DrillDto } from "@/lib/calc-dto";
+import { areaPair, drillDto, tidy, type AreaPair, type DrillDto } from "@/lib/format/quantity-pairs";
 import { ALL_DRILLS, FRACTION_DRILLS, INCH_DRILLS, METRIC_DRILLS, NUMBER_DRILLS } from "@/lib/engineering/drills";
 import { extraFuelFromAfr, mainJetArea } from "@/lib/engineering/enrichment";
 import { solveHoleLayout } from "@/lib/engineering/hole-layout";

@@ -1,7 +1,7 @@
 import { ResultPanel } from "@/components/forms/readings";
 import { Tag } from "@/components/ui/sheet";
 import { Table, Td, Th } from "@/components/ui/table";
-import { areaNumber, areaUnitLabel, drillSize, fixed, formatArea, type DisplayLengthUnit } from "@/lib/display";
+import { areaNumber, areaUnitLabel, drillSize, fixed, formatArea, type DisplayLengthUnit } from "@/lib/format/display";
 import type { RestrictionResultDto } from "./compute";
 
 export function RestrictionResults({ result, unit }: { result: RestrictionResultDto; unit: DisplayLengthUnit }) {

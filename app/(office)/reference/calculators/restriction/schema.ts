@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { formNumber, formWholeNumber, optionalFormQuantity } from "@/lib/form-schema";
-import { FORM_AREA_UNITS, FORM_LENGTH_UNITS } from "@/lib/form-units";
+import { formNumber, formWholeNumber, optionalFormQuantity } from "@/lib/forms/form-schema";
+import { FORM_AREA_UNITS, FORM_LENGTH_UNITS } from "@/lib/forms/units";
 
 export const TARGET_KINDS = ["area", "afr", "percent"] as const;
 export const DRILL_SETS = ["inch", "number", "fraction", "metric", "all"] as const;

@@ -1,12 +1,12 @@
 import "server-only";
-import { areaPair, drillDto, tidy, type AreaPair, type DrillDto } from "@/lib/calc-dto";
+import { areaPair, drillDto, tidy, type AreaPair, type DrillDto } from "@/lib/format/quantity-pairs";
 import { INCH_DRILLS } from "@/lib/engineering/drills";
 import { mainJetArea } from "@/lib/engineering/enrichment";
 import { fuelProperties, type FuelSpec } from "@/lib/engineering/fuels";
 import { proposeStaging, valveOpeningGaugePa, type CarburetorSide, type PowerValve, type StagingModel } from "@/lib/engineering/staging";
 import { fromSI, PA_PER_INHG, STANDARD_ATMOSPHERE_PA, toSI } from "@/lib/engineering/units";
-import { RequestRefusal } from "@/lib/errors";
-import { stagingBalanceData, stagingChartData, type StagingBalanceDto, type StagingChartDto } from "@/lib/staging-chart";
+import { RequestRefusal } from "@/db/refusal";
+import { stagingBalanceData, stagingChartData, type StagingBalanceDto, type StagingChartDto } from "@/lib/jobs/staging-chart";
 import { refuseOutOfRange } from "../refusal";
 import { chargeModelFromPeak } from "@/lib/engineering/charge-temperature";
 import type { STAGING_FUELS, StagingInput } from "./schema";

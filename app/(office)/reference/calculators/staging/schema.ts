@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { formNumber, formQuantity, formWholeNumber, optionalFormQuantity } from "@/lib/form-schema";
-import { FORM_AREA_UNITS, FORM_BOOST_UNITS, FORM_LENGTH_UNITS, FORM_OPENING_UNITS, FORM_TEMPERATURE_UNITS } from "@/lib/form-units";
+import { formNumber, formQuantity, formWholeNumber, optionalFormQuantity } from "@/lib/forms/form-schema";
+import { FORM_AREA_UNITS, FORM_BOOST_UNITS, FORM_LENGTH_UNITS, FORM_OPENING_UNITS, FORM_TEMPERATURE_UNITS } from "@/lib/forms/units";
 
 export const STAGING_COMMANDS = ["chart", "propose"] as const;
 export const STAGING_FUELS = ["gasoline", "E10", "E30", "E85", "ethanol", "methanol"] as const;

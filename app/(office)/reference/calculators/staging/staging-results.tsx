@@ -4,7 +4,7 @@ import { ResultPanel } from "@/components/forms/readings";
 import { StagingChart, StagingChartKey } from "@/components/staging-chart";
 import { Tag } from "@/components/ui/sheet";
 import { Table, Td, Th } from "@/components/ui/table";
-import { areaNumber, areaUnitLabel, drillSize, fixed, formatArea, type DisplayLengthUnit } from "@/lib/display";
+import { areaNumber, areaUnitLabel, drillSize, fixed, formatArea, type DisplayLengthUnit } from "@/lib/format/display";
 import type { StagingResultDto } from "./compute";
 
 const pct = (value: number | null) => (value === null ? "—" : `${fixed(value, 1)} %`);

@@ -1,7 +1,7 @@
 "use server";
 
 import { ALL_ROLES } from "@/lib/auth/session";
-import { runFormAction, type FormResult } from "@/lib/form-action";
+import { runFormAction, type FormResult } from "@/lib/forms/form-action";
 import { computePassagePlug, computeTapDrill, type PassagePlugResultDto, type TapDrillResultDto } from "./compute";
 import { passagePlugSchema, tapDrillSchema } from "./schema";
 

@@ -1,9 +1,9 @@
 import "server-only";
-import { drillDto, lengthPair, tidy, type DrillDto, type LengthPair } from "@/lib/calc-dto";
+import { drillDto, lengthPair, tidy, type DrillDto, type LengthPair } from "@/lib/format/quantity-pairs";
 import { ALL_THREADS, clearanceDrill, METRIC_THREADS, parseThread, passagePlug, tapDrill, UNIFIED_THREADS, type Thread } from "@/lib/engineering/threads";
 import type { Drill } from "@/lib/engineering/types";
 import { toSI } from "@/lib/engineering/units";
-import { RequestRefusal } from "@/lib/errors";
+import { RequestRefusal } from "@/db/refusal";
 import { refuseOutOfRange } from "../refusal";
 import type { PassagePlugFormInput, TapDrillInput } from "./schema";
 

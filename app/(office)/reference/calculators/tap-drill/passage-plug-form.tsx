@@ -10,8 +10,8 @@ import { Reading, Readings, ResultPanel, ResultPending, ResultWarnings } from "@
 import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button } from "@/components/ui/button";
 import { Tag } from "@/components/ui/sheet";
-import { drillSize, fixed, formatLength, type DisplayLengthUnit } from "@/lib/display";
-import { FORM_LENGTH_UNITS } from "@/lib/form-units";
+import { drillSize, fixed, formatLength, type DisplayLengthUnit } from "@/lib/format/display";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
 import { passagePlugAction } from "./actions";
 import { passagePlugSchema } from "./schema";
 

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { MAX_TAP_ENGAGEMENT_PCT, parseThread } from "@/lib/engineering/threads";
-import { formNumber, formQuantity, optionalFormQuantity } from "@/lib/form-schema";
-import { FORM_LENGTH_UNITS } from "@/lib/form-units";
+import { formNumber, formQuantity, optionalFormQuantity } from "@/lib/forms/form-schema";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
 
 /** Up to the basic minor diameter's 83.3 %: a smaller drill leaves metal under the thread's root (ASME B1.1). */
 export const engagementSchema = formNumber("thread engagement", { min: 0 }).max(MAX_TAP_ENGAGEMENT_PCT + 1e-9, {

@@ -8,7 +8,7 @@ import { Reading, Readings, ResultPanel, ResultPending } from "@/components/form
 import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
-import { drillSize, fixed, formatLength, type DisplayLengthUnit } from "@/lib/display";
+import { drillSize, fixed, formatLength, type DisplayLengthUnit } from "@/lib/format/display";
 import { ALL_THREADS } from "@/lib/engineering/threads";
 import { tapDrillAction } from "./actions";
 import { tapDrillSchema } from "./schema";

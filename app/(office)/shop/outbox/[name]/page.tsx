@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { PageHeader, Sheet } from "@/components/ui/sheet";
 import { requireRole } from "@/lib/auth/session";
-import { getOutboxMessage, OUTBOX_NAME } from "@/lib/outbox";
+import { getOutboxMessage, OUTBOX_NAME } from "@/lib/server/outbox";
 import { attachmentHref, formatBytes, formatSent, outboxHref } from "../format";
 
 export const metadata: Metadata = { title: "Outbox message" };

@@ -1,10 +1,10 @@
 import { z } from "zod";
 import { getVisibleBlock } from "@/db/attachments";
-import { apiError, apiRoute, invalidInput } from "@/lib/api";
+import { apiError, apiRoute, invalidInput } from "@/lib/http/api-route";
 import { ALL_ROLES } from "@/lib/auth/session";
-import { storeBlockPhoto } from "@/lib/photo-upload";
-import { MAX_PHOTO_BYTES } from "@/lib/photos";
-import { idParams } from "@/lib/route-params";
+import { storeBlockPhoto } from "@/lib/bench/photo-upload";
+import { MAX_PHOTO_BYTES } from "@/lib/server/images";
+import { idParams } from "@/lib/http/route-params";
 
 const fieldsSchema = z.object({
   operationId: z.uuid({ error: "operationId must be an operation's id" }).optional(),

@@ -1,9 +1,9 @@
 import { z } from "zod";
-import { renderTravelerPdf } from "@/components/traveler/render-traveler";
+import { renderTravelerPdf } from "@/lib/traveler/pdf/render-traveler";
 import { getTravelerData } from "@/db/travelers";
-import { apiRoute } from "@/lib/api";
+import { apiRoute } from "@/lib/http/api-route";
 import { ALL_ROLES } from "@/lib/auth/session";
-import { idParams } from "@/lib/route-params";
+import { idParams } from "@/lib/http/route-params";
 import { PAPER_SIZES } from "@/lib/traveler/types";
 
 const querySchema = z.object({

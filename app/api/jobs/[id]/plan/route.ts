@@ -1,9 +1,9 @@
 import { getJob } from "@/db/jobs";
-import { apiError, apiRoute } from "@/lib/api";
+import { apiError, apiRoute } from "@/lib/http/api-route";
 import { ALL_ROLES } from "@/lib/auth/session";
-import { shownPlanOf } from "@/lib/job-plan-shown";
-import { planDto } from "@/lib/plan-dto";
-import { idParams } from "@/lib/route-params";
+import { shownPlanOf } from "@/lib/jobs/plan-shown";
+import { planDto } from "@/lib/jobs/plan-dto";
+import { idParams } from "@/lib/http/route-params";
 
 /**
  * The job's plan: solved now for a draft, from the approved snapshot past draft. Machinists see released

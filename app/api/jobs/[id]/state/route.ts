@@ -1,9 +1,9 @@
 import { getJob } from "@/db/jobs";
-import { moveJob } from "@/lib/job-moves";
-import { apiError, apiRoute } from "@/lib/api";
+import { moveJob } from "@/lib/jobs/moves";
+import { apiError, apiRoute } from "@/lib/http/api-route";
 import { OFFICE_ROLES } from "@/lib/auth/session";
-import { idParams } from "@/lib/route-params";
-import { jobStateChangeSchema } from "@/app/(office)/jobs/schema";
+import { idParams } from "@/lib/http/route-params";
+import { jobStateChangeSchema } from "@/lib/jobs/schema";
 
 /** Moves a job to another state; 409 when the move is not allowed from where it is. */
 export const POST = apiRoute({ roles: OFFICE_ROLES, params: idParams("id"), body: jobStateChangeSchema }, async ({ user, params, body }) => {

@@ -1,9 +1,9 @@
 import { z } from "zod";
-import { apiRoute, invalidInput } from "@/lib/api";
+import { apiRoute, invalidInput } from "@/lib/http/api-route";
 import { ALL_ROLES } from "@/lib/auth/session";
-import { signOffFromBench } from "@/lib/bench-sign-off";
-import { idParams } from "@/lib/route-params";
-import { signOffSchema } from "@/app/bench/[blockId]/schema";
+import { signOffFromBench } from "@/lib/bench/sign-off";
+import { idParams } from "@/lib/http/route-params";
+import { signOffSchema } from "@/lib/bench/sign-off-schema";
 
 const bodySchema = z.record(z.string(), z.unknown(), { error: "(body) must be a JSON object" });
 

@@ -1,6 +1,6 @@
-import { apiRoute } from "@/lib/api";
+import { apiRoute } from "@/lib/http/api-route";
 import { sendPasswordReset } from "@/lib/auth/passwords";
-import { idParams } from "@/lib/route-params";
+import { idParams } from "@/lib/http/route-params";
 
 /** Mails the user a single-use link to set a new password (202). Admin only. */
 export const POST = apiRoute({ roles: ["admin"], params: idParams("id") }, async ({ user, params }) => {

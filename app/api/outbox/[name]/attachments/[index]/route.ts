@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { apiError, apiRoute } from "@/lib/api";
-import { getOutboxAttachment, OUTBOX_NAME } from "@/lib/outbox";
+import { apiError, apiRoute } from "@/lib/http/api-route";
+import { getOutboxAttachment, OUTBOX_NAME } from "@/lib/server/outbox";
 
 const paramsSchema = z.object({
   name: z.string().regex(OUTBOX_NAME, { error: "name must be an outbox file's name" }),

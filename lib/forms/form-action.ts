@@ -5,8 +5,8 @@ import type { z } from "zod";
 import type { UserRole } from "@/db/schema";
 import { checkRole, type SessionUser } from "@/lib/auth/session";
 import { unstable_rethrow } from "next/navigation";
-import { RequestRefusal } from "@/lib/errors";
-import { log } from "@/lib/log";
+import { RequestRefusal } from "@/db/refusal";
+import { log } from "@/lib/server/log";
 import { CONTROL_CHARACTER_MESSAGE, findControlCharacterInForm } from "@/lib/http/control-characters";
 
 /**

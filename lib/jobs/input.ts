@@ -1,5 +1,5 @@
 import type { BlockFields, JobFields, StageFields } from "@/db/jobs";
-import type { JobBlocksInput, UpdateJobInput } from "@/app/(office)/jobs/schema";
+import type { JobBlocksInput, UpdateJobInput } from "@/lib/jobs/schema";
 import { standardAtmospherePressurePa } from "@/lib/engineering/atmosphere";
 
 // Parsed form/API input (already SI) -> database columns.

@@ -3,9 +3,9 @@ import { getBenchView, type SignOffOutcome } from "@/db/bench";
 import { getDb } from "@/db/client";
 import { eq } from "drizzle-orm";
 import { jobs, meteringBlocks, users } from "@/db/schema";
-import { sendMailSafely } from "./mail";
-import { formatMeasurement, formatRange } from "./measurement-format";
-import { getEnv } from "./env";
+import { sendMailSafely } from "@/lib/server/mail";
+import { formatMeasurement, formatRange } from "@/lib/format/measurement";
+import { getEnv } from "@/lib/server/env";
 
 // Messages that keep the tuner in step with the bench: a measurement outside plan, and the job done.
 

@@ -3,8 +3,8 @@ import type { BlockRow, JobRecord } from "@/db/jobs";
 import { getRevisionSnapshot, solveJob } from "@/db/revisions";
 import type { Job } from "@/db/schema";
 import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
-import { RequestRefusal } from "@/lib/errors";
-import { snapshotJob, snapshotPlan } from "@/lib/job-plan";
+import { RequestRefusal } from "@/db/refusal";
+import { snapshotJob, snapshotPlan } from "@/lib/jobs/plan";
 
 /** The plan the job stands on: the job as it was, its blocks and the solved plan, and where it came from. */
 export interface ShownPlan {

@@ -1,18 +1,18 @@
 import "server-only";
 import { eq } from "drizzle-orm";
-import { renderTravelerPdf } from "@/components/traveler/render-traveler";
+import { renderTravelerPdf } from "@/lib/traveler/pdf/render-traveler";
 import { getDb } from "@/db/client";
 import type { Viewer } from "@/db/jobs";
 import { changeJobState } from "@/db/revisions";
 import { jobs, meteringBlocks } from "@/db/schema";
 import { getTravelerData } from "@/db/travelers";
 import { listActiveUsersByRole } from "@/db/users";
-import { benchUrl } from "./bench-url";
-import { getEnv } from "./env";
-import type { JobState } from "./job-states";
-import { sendMailSafely } from "./mail";
-import { ALL_CAUTIONS } from "./safety";
-import { log } from "@/lib/log";
+import { benchUrl } from "@/lib/bench/url";
+import { getEnv } from "@/lib/server/env";
+import type { JobState } from "@/db/job-states";
+import { sendMailSafely } from "@/lib/server/mail";
+import { ALL_CAUTIONS } from "@/lib/safety/cautions";
+import { log } from "@/lib/server/log";
 
 /**
  * Moves a job to another state (the one way pages and the API do it) and sends what the move calls for:

@@ -1,5 +1,5 @@
 import "server-only";
-import { areaIn2, drillDto, tidy, type DrillDto } from "@/lib/calc-dto";
+import { areaIn2, drillDto, tidy, type DrillDto } from "@/lib/format/quantity-pairs";
 import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
 import type { PlanWarning } from "@/lib/engineering/plan-warnings";
 import type { BlockRow } from "@/db/jobs";

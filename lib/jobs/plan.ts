@@ -7,7 +7,7 @@ import { isCurrentPlan, upgradePlan } from "@/lib/engineering/plan-upgrade";
 import { STANDARD_ATMOSPHERE_PA } from "@/lib/engineering/units";
 import type { Job } from "@/db/schema";
 import type { BlockRow, StageRow } from "@/db/jobs";
-import { RequestRefusal } from "@/lib/errors";
+import { RequestRefusal } from "@/db/refusal";
 
 // Turns the stored job (SI columns) into the planner's inputs, and runs the planner.
 

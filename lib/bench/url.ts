@@ -1,5 +1,5 @@
 import "server-only";
-import { getEnv } from "@/lib/env";
+import { getEnv } from "@/lib/server/env";
 
 /** Path of the bench page for one block in one revision: what a traveler's QR code opens. */
 export function benchPath(blockId: string, revision: number): string {

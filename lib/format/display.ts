@@ -1,4 +1,4 @@
-import type { AreaPair, DrillDto, LengthPair } from "@/lib/calc-dto";
+import type { AreaPair, DrillDto, LengthPair } from "@/lib/format/quantity-pairs";
 
 // Formatting for screens, safe in client components: values arrive converted (lib/calc-dto pairs), and
 // this only chooses the unit and the number of decimals. Decimals are fixed per unit so columns align.

@@ -2,9 +2,9 @@ import "server-only";
 import { signOffOperation, type SignOffOutcome } from "@/db/bench";
 import type { Viewer } from "@/db/jobs";
 import { toSI } from "@/lib/engineering/units";
-import type { SignOffInput } from "@/app/bench/[blockId]/schema";
-import { sendSignOffNotices } from "./bench-notices";
-import { RequestRefusal } from "./errors";
+import type { SignOffInput } from "@/lib/bench/sign-off-schema";
+import { sendSignOffNotices } from "./notices";
+import { RequestRefusal } from "@/db/refusal";
 
 const PRESSURE_UNITS = new Set(["psi", "kPa", "bar"]);
 

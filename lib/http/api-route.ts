@@ -3,13 +3,13 @@ import { NextResponse } from "next/server";
 import type { z } from "zod";
 import type { UserRole } from "@/db/schema";
 import { checkRole, type SessionUser } from "@/lib/auth/session";
-import { getEnv } from "@/lib/env";
-import { RequestRefusal, type UnprocessableCode } from "@/lib/errors";
+import { getEnv } from "@/lib/server/env";
+import { RequestRefusal, type UnprocessableCode } from "@/db/refusal";
 import { BodyTooLarge, readLimitedForm, readLimitedText } from "@/lib/http/body-limit";
 import { CONTROL_CHARACTER_MESSAGE, findControlCharacter, findControlCharacterInForm } from "@/lib/http/control-characters";
 import { isSameOriginRequest, isStateChanging } from "@/lib/http/same-origin";
 import { applySecurityHeaders, securityHeaders } from "@/lib/http/security-headers";
-import { log } from "@/lib/log";
+import { log } from "@/lib/server/log";
 
 export type ApiErrorCode =
   | "invalid_input"

@@ -1,5 +1,5 @@
 import "server-only";
-import { areaPair, tidy, type AreaPair } from "@/lib/calc-dto";
+import { areaPair, tidy, type AreaPair } from "@/lib/format/quantity-pairs";
 import {
   stagingBalance,
   sweepStaging,

@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { quantity, optionalQuantity } from "@/lib/quantity-input";
-import { JOB_STATES } from "@/lib/job-states";
+import { quantity, optionalQuantity } from "@/lib/forms/quantity-input";
+import { JOB_STATES } from "@/db/job-states";
 import { SITE_ELEVATION_RANGE_M } from "@/lib/engineering/atmosphere";
 
 // Schemas of the job forms, shared by the Conform forms, the server actions and the JSON API. Quantities come

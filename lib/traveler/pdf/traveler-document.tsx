@@ -1,7 +1,7 @@
 import { Document, Page, Path, Rect, StyleSheet, Svg, Text, View } from "@react-pdf/renderer";
 import type { ReactNode } from "react";
 import type { CautionTopic } from "@/lib/engineering/conversion-plan";
-import { SAFETY_CAUTIONS, type SafetyCaution } from "@/lib/safety";
+import { SAFETY_CAUTIONS, type SafetyCaution } from "@/lib/safety/cautions";
 import { acceptance, displacement, isoDate, lengthBoth, measured, psi } from "@/lib/traveler/format";
 import type { PaperSize, TravelerData, TravelerOperation } from "@/lib/traveler/types";
 import { FIGURE_FACE, TEXT_FACE } from "./fonts";

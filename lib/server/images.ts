@@ -1,8 +1,8 @@
 import "server-only";
 import sharp, { type Metadata } from "sharp";
-import { RequestRefusal } from "./errors";
+import { RequestRefusal } from "@/db/refusal";
 // Phones hand a browser JPEG (an iPhone converts its HEIC on the way); each format is stored and served as itself.
-import { PHOTO_FORMATS, type PhotoFormat } from "./photo-formats";
+import { PHOTO_FORMATS, type PhotoFormat } from "@/lib/bench/photo-formats";
 
 /** The largest photo the bench accepts. A phone photo is typically 2-6 MB. */
 export const MAX_PHOTO_BYTES = 12 * 1024 * 1024;

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { drillLabelProblem, findDrill } from "@/lib/engineering/drills";
-import { LARGEST_FIGURE, SMALLEST_FIGURE } from "@/lib/form-schema";
+import { LARGEST_FIGURE, SMALLEST_FIGURE } from "@/lib/forms/form-schema";
 import type { FuelSpec } from "@/lib/engineering/fuels";
 import { parseThread, type Thread } from "@/lib/engineering/threads";
 import type { Drill } from "@/lib/engineering/types";

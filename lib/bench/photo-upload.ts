@@ -2,8 +2,8 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { insertAttachment } from "@/db/attachments";
 import type { Viewer } from "@/db/jobs";
-import { checkPhoto } from "./photos";
-import { deleteObject, putObject } from "./storage";
+import { checkPhoto } from "@/lib/server/images";
+import { deleteObject, putObject } from "@/lib/server/storage";
 
 /**
  * Stores a checked photo (upright, without metadata) and its thumbnail, then records them. If recording fails the stored objects are
