@@ -10,7 +10,7 @@ const LAYERS = [
   { type: "feature", pattern: "lib/**", partialMatch: false },
   { type: "db", pattern: "db/**", partialMatch: false },
   { type: "components", pattern: "components/**", partialMatch: false },
-  { type: "app", pattern: ["app/**", "proxy.ts"], partialMatch: false },
+  { type: "app", pattern: "app/**", partialMatch: false },
 ];
 const MAY_IMPORT = {
   app: ["app", "components", "feature", "db", "engineering"],

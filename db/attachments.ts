@@ -1,10 +1,9 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
-import { SHOP_FLOOR_STATES } from "@/db/job-states";
 import { RequestRefusal } from "@/db/refusal";
 import { recordAudit } from "./audit";
 import { getDb } from "./client";
-import type { Viewer } from "./jobs";
+import { maySeeJob, type Viewer } from "./visibility";
 import { attachments, jobs, meteringBlocks, operations } from "./schema";
 
 /** The job a block belongs to, if the viewer may see it. */
@@ -15,7 +14,7 @@ export async function getVisibleBlock(viewer: Viewer, blockId: string): Promise<
     .innerJoin(jobs, eq(jobs.id, meteringBlocks.jobId))
     .where(eq(meteringBlocks.id, blockId));
   if (!row) return undefined;
-  if (viewer.role === "machinist" && !SHOP_FLOOR_STATES.includes(row.state)) return undefined;
+  if (!maySeeJob(viewer, row.state)) return undefined;
   return { blockId: row.blockId, jobId: row.jobId, jobNumber: row.jobNumber };
 }
 

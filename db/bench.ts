@@ -1,11 +1,13 @@
 import "server-only";
 import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import type { PlannedMeasurement } from "@/lib/engineering/conversion-plan";
-import { SHOP_FLOOR_STATES, type JobState } from "@/db/job-states";
+import type { JobState } from "@/db/job-states";
+import { maySeeJob } from "./visibility";
 import { RequestRefusal } from "@/db/refusal";
 import { recordAudit } from "./audit";
 import { getDb } from "./client";
-import { lockJob, type Viewer } from "./jobs";
+import { lockJob } from "./jobs";
+import type { Viewer } from "./visibility";
 import { currentRevisionComplete } from "./revisions";
 import { attachments, customers, jobs, measurements, meteringBlocks, operations, planRevisions, signOffs, users } from "./schema";
 
@@ -54,7 +56,7 @@ export async function getBenchView(viewer: Viewer, blockId: string, revisionNumb
     .innerJoin(customers, eq(customers.id, jobs.customerId))
     .where(eq(meteringBlocks.id, blockId));
   if (!row) return undefined;
-  if (viewer.role === "machinist" && !SHOP_FLOOR_STATES.includes(row.state)) return undefined;
+  if (!maySeeJob(viewer, row.state)) return undefined;
   const number = revisionNumber ?? row.currentRevision;
   const [revision] = await db
     .select({ id: planRevisions.id, number: planRevisions.number, status: planRevisions.status, releasedAt: planRevisions.releasedAt })
@@ -148,7 +150,7 @@ export async function signOffOperation(
       .where(eq(operations.id, input.operationId));
     if (!op) throw new RequestRefusal(404, "No such operation.", "operationId");
     const job = await lockJob(tx, op.jobId);
-    if (viewer.role === "machinist" && !SHOP_FLOOR_STATES.includes(job.state)) throw new RequestRefusal(404, "No such operation.", "operationId");
+    if (!maySeeJob(viewer, job.state)) throw new RequestRefusal(404, "No such operation.", "operationId");
     if (op.revisionStatus !== "current" || op.revisionNumber !== job.currentRevision) {
       throw new RequestRefusal(409, `Revision ${op.revisionNumber} is superseded: work from revision ${job.currentRevision}.`, "operationId");
     }

@@ -1,7 +1,6 @@
 import "server-only";
 import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
 import { Pool } from "pg";
-import { getEnv } from "@/lib/server/env";
 import * as schema from "./schema";
 
 export type Database = NodePgDatabase<typeof schema>;
@@ -11,9 +10,16 @@ export type Executor = Parameters<Parameters<Database["transaction"]>[0]>[0] | D
 let pool: Pool | undefined;
 let database: Database | undefined;
 
+/** The store's one setting; lib/server/env.ts validates it with the rest at start-up. */
+function databaseUrl(): string {
+  const url = process.env.DATABASE_URL;
+  if (!url) throw new Error("Invalid configuration:\n  DATABASE_URL: set it to a postgres:// URL");
+  return url;
+}
+
 export function getDb(): Database {
   if (!database) {
-    pool = new Pool({ connectionString: getEnv().DATABASE_URL, max: 10 });
+    pool = new Pool({ connectionString: databaseUrl(), max: 10 });
     database = drizzle(pool, { schema });
   }
   return database;

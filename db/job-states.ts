@@ -30,5 +30,3 @@ export function nextStates(from: JobState): readonly JobState[] {
   return ALLOWED[from];
 }
 
-/** States whose work the bench (machinists) may see. */
-export const SHOP_FLOOR_STATES: readonly JobState[] = ["released", "machining", "verified", "delivered"];

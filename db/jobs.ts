@@ -1,17 +1,13 @@
 import "server-only";
-import { and, asc, count, desc, eq, ilike, inArray, or, sql, type SQL } from "drizzle-orm";
+import { and, asc, count, desc, eq, ilike, inArray, or, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
-import { SHOP_FLOOR_STATES, type JobState } from "@/db/job-states";
+import type { JobState } from "@/db/job-states";
+import { visibleJobsWhere, type Viewer } from "./visibility";
 import { RequestRefusal } from "@/db/refusal";
 import { recordAudit } from "./audit";
 import { getDb, type Executor } from "./client";
 import { insertCustomer } from "./customers";
-import { customers, enrichmentStages, jobs, meteringBlocks, operations, planRevisions, users, type Job, type UserRole } from "./schema";
-
-export interface Viewer {
-  id: string;
-  role: UserRole;
-}
+import { customers, enrichmentStages, jobs, meteringBlocks, operations, planRevisions, users, type Job } from "./schema";
 
 export interface JobListRow {
   id: string;
@@ -23,11 +19,6 @@ export interface JobListRow {
 }
 
 const tuners = alias(users, "tuner");
-
-/** Machinists see only work that reached the shop floor. */
-function visibleTo(viewer: Viewer): SQL | undefined {
-  return viewer.role === "machinist" ? inArray(jobs.state, [...SHOP_FLOOR_STATES]) : undefined;
-}
 
 export async function listJobs(
   viewer: Viewer,
@@ -45,7 +36,7 @@ export async function listJobs(
   const db = getDb();
   const pattern = query.q ? `%${query.q.replace(/[%_\\]/g, (c) => `\\${c}`)}%` : undefined;
   const where = and(
-    visibleTo(viewer),
+    visibleJobsWhere(viewer),
     query.state ? eq(jobs.state, query.state) : undefined,
     query.customer ? eq(jobs.customerId, query.customer) : undefined,
     query.tuner ? eq(jobs.tunerId, query.tuner) : undefined,
@@ -115,7 +106,7 @@ export async function getJob(viewer: Viewer, id: string): Promise<JobRecord | un
     .from(jobs)
     .innerJoin(customers, eq(customers.id, jobs.customerId))
     .innerJoin(tuners, eq(tuners.id, jobs.tunerId))
-    .where(and(eq(jobs.id, id), visibleTo(viewer)));
+    .where(and(eq(jobs.id, id), visibleJobsWhere(viewer)));
   if (!row) return undefined;
   const blockRows = await db.select().from(meteringBlocks).where(eq(meteringBlocks.jobId, id)).orderBy(asc(meteringBlocks.side));
   const stageRows = blockRows.length
@@ -306,4 +297,20 @@ export async function chooseStageLayout(actor: Viewer, input: { jobId: string; s
     await touchForEdit(tx, job);
     await recordAudit(tx, actor.id, "job.choose", input.jobId, { stageId: input.stageId, count: input.count, drill: input.drillLabel });
   });
+}
+
+/** The job's number and its tuner's address, for messages about the job (no visibility: the system writes them). */
+export async function getJobTuner(jobId: string): Promise<{ number: string; email: string; name: string } | undefined> {
+  const [row] = await getDb()
+    .select({ email: users.email, name: users.name, number: jobs.number })
+    .from(jobs)
+    .innerJoin(users, eq(users.id, jobs.tunerId))
+    .where(eq(jobs.id, jobId));
+  return row;
+}
+
+/** The ids of the job's metering blocks, primary before secondary. */
+export async function listJobBlockIds(jobId: string): Promise<string[]> {
+  const rows = await getDb().select({ id: meteringBlocks.id }).from(meteringBlocks).where(eq(meteringBlocks.jobId, jobId)).orderBy(asc(meteringBlocks.side));
+  return rows.map((r) => r.id);
 }

@@ -2,15 +2,12 @@ import "server-only";
 import { and, asc, count, eq, inArray } from "drizzle-orm";
 import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
 import { canMove, type JobState } from "@/db/job-states";
-import { planJob } from "@/lib/jobs/plan";
 import { RequestRefusal } from "@/db/refusal";
-import { dangerWarnings } from "@/lib/engineering/plan-warnings";
 import { recordAudit } from "./audit";
 import { getDb, type Executor } from "./client";
-import { listStockedDrills } from "./drill-stock";
-import { getShopSettings } from "./shop-settings";
-import { lockJob, type BlockRow, type Viewer } from "./jobs";
-import { enrichmentStages, jobs, measurements, meteringBlocks, operations, planRevisions, signOffs } from "./schema";
+import { lockJob, type BlockRow } from "./jobs";
+import type { Viewer } from "./visibility";
+import { enrichmentStages, jobs, measurements, meteringBlocks, operations, planRevisions, signOffs, type Job } from "./schema";
 
 /** What an approved revision keeps forever: the inputs as they were, and the plan solved from them. */
 export interface RevisionSnapshot {
@@ -30,36 +27,31 @@ async function loadBlocks(db: Executor, jobId: string): Promise<BlockRow[]> {
   return blocks.map((b) => ({ ...b, stages: stages.filter((s) => s.blockId === b.id) }));
 }
 
-/** The plan of the job's working inputs, solved now with the shop's current rack. */
-export async function solveJob(jobId: string): Promise<ConversionPlan> {
+/** The job's working inputs (the row and its blocks with their stages), read together. */
+export async function getJobInputs(jobId: string): Promise<{ job: Job; blocks: BlockRow[] }> {
   const db = getDb();
   const [job] = await db.select().from(jobs).where(eq(jobs.id, jobId));
   if (!job) throw new RequestRefusal(404, "No such job.");
-  return planJob(job, await loadBlocks(db, jobId), await listStockedDrills(), await getShopSettings());
+  return { job, blocks: await loadBlocks(db, jobId) };
+}
+
+/** What the workflow decides from the locked inputs: the plan to keep, and the warnings acknowledged with it. */
+export interface ApprovedPlan {
+  plan: ConversionPlan;
+  acknowledgedWarnings: { code: string; level: string; message: string }[];
 }
 
 /**
- * Approves the working inputs as the next revision: solves them, keeps the snapshot, writes each block's
- * operations, marks the previous revision superseded and moves the job to planned. All or nothing.
+ * Keeps the working inputs as the next revision: under the job's lock, `decide` solves the inputs as they are
+ * (and may refuse); the store keeps the snapshot, writes each block's operations, marks the previous revision
+ * superseded and moves the job to planned. All or nothing.
  */
-export async function approveRevision(actor: Viewer, jobId: string, options: { acknowledgeWarnings?: boolean | undefined } = {}): Promise<{ revision: number }> {
-  const stocked = await listStockedDrills();
-  const shop = await getShopSettings();
+export async function storeRevision(actor: Viewer, jobId: string, decide: (job: Job, blocks: BlockRow[]) => ApprovedPlan): Promise<{ revision: number }> {
   return getDb().transaction(async (tx) => {
     const job = await lockJob(tx, jobId);
     if (!canMove(job.state, "planned")) throw new RequestRefusal(409, `A ${job.state} job cannot be approved: edit it first.`, "to");
     const blocks = await loadBlocks(tx, jobId);
-    const plan = planJob(job, blocks, stocked, shop);
-    // A plan that may damage the engine is approved only with an explicit acknowledgement, kept with it.
-    const dangers = dangerWarnings(plan.warnings).map(({ code, level, message }) => ({ code, level, message }));
-    if (dangers.length && !options.acknowledgeWarnings) {
-      throw new RequestRefusal(
-        409,
-        `The plan has ${dangers.length} danger warning${dangers.length > 1 ? "s" : ""}: ${dangers.map((d) => d.message).join(" ")} Approve with an explicit acknowledgement, or change the plan.`,
-        "acknowledgeWarnings",
-        { warnings: dangers },
-      );
-    }
+    const { plan, acknowledgedWarnings } = decide(job, blocks);
     const number = job.currentRevision + 1;
     const now = new Date();
     await tx
@@ -69,7 +61,7 @@ export async function approveRevision(actor: Viewer, jobId: string, options: { a
     const snapshot: RevisionSnapshot = { job: { ...job }, blocks, plan };
     const [revision] = await tx
       .insert(planRevisions)
-      .values({ jobId, number, snapshot: JSON.parse(JSON.stringify(snapshot)), approvedById: actor.id, approvedAt: now, acknowledgedWarnings: dangers })
+      .values({ jobId, number, snapshot: JSON.parse(JSON.stringify(snapshot)), approvedById: actor.id, approvedAt: now, acknowledgedWarnings })
       .returning({ id: planRevisions.id });
     const rows = plan.blocks.flatMap((blockPlan) =>
       blockPlan.operations.map((op) => ({
@@ -86,7 +78,7 @@ export async function approveRevision(actor: Viewer, jobId: string, options: { a
     );
     if (rows.length) await tx.insert(operations).values(rows);
     await tx.update(jobs).set({ state: "planned", currentRevision: number, updatedAt: now }).where(eq(jobs.id, jobId));
-    await recordAudit(tx, actor.id, "job.approve", jobId, { revision: number, ...(dangers.length ? { acknowledgedWarnings: dangers } : {}) });
+    await recordAudit(tx, actor.id, "job.approve", jobId, { revision: number, ...(acknowledgedWarnings.length ? { acknowledgedWarnings } : {}) });
     return { revision: number };
   });
 }
@@ -119,18 +111,9 @@ export async function currentRevisionComplete(
 
 /**
  * Moves the job to another state when the move is allowed: planned -> released stamps the revision's
- * release; draft -> planned approves a revision; verified needs a complete bench record.
+ * release; verified needs a complete bench record. Approval (-> planned) keeps a revision: `storeRevision`.
  */
-export async function changeJobState(
-  actor: Viewer,
-  jobId: string,
-  to: JobState,
-  options: { acknowledgeWarnings?: boolean | undefined } = {},
-): Promise<{ state: JobState; revision: number }> {
-  if (to === "planned") {
-    const { revision } = await approveRevision(actor, jobId, options);
-    return { state: "planned", revision };
-  }
+export async function changeJobState(actor: Viewer, jobId: string, to: Exclude<JobState, "planned">): Promise<{ state: JobState; revision: number }> {
   return getDb().transaction(async (tx) => {
     const job = await lockJob(tx, jobId);
     if (!canMove(job.state, to)) throw new RequestRefusal(409, `A ${job.state} job cannot move to ${to}.`, "to");

@@ -1,38 +1,47 @@
 import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
-import { benchUrl } from "@/lib/bench/url";
 import { RequestRefusal } from "@/db/refusal";
-import { fuelProperties } from "@/lib/engineering/fuels";
-import { fuelSpecOf } from "@/lib/jobs/plan";
-import { SHOP_FLOOR_STATES } from "@/db/job-states";
-import { travelerOperations } from "@/lib/traveler/operations";
-import { travelerPlanNotes } from "@/lib/traveler/plan-notes";
-import type { TravelerData } from "@/lib/traveler/types";
 import { getDb } from "./client";
-import type { Viewer } from "./jobs";
+import type { BlockRow } from "./jobs";
 import type { RevisionSnapshot } from "./revisions";
-import { customers, jobs, meteringBlocks, operations, planRevisions, users, type Job } from "./schema";
+import { customers, jobs, meteringBlocks, operations, planRevisions, users, type Job, type MeteringBlock, type Operation, type PlanRevision } from "./schema";
+import { maySeeJob, type Viewer } from "./visibility";
 
 const approvers = alias(users, "approver");
 const releasers = alias(users, "releaser");
 
-function fuelName(job: Job): string {
-  try {
-    return fuelProperties(fuelSpecOf(job)).name;
-  } catch {
-    return job.fuelKind;
-  }
+/** What the store keeps of one block in one revision: the sources of its printed traveler. */
+export interface TravelerRecord {
+  /** The job as approved in the revision (its snapshot over the working row). */
+  job: Job;
+  /** The block as approved, with the working row's identity. */
+  block: MeteringBlock | BlockRow;
+  blockId: string;
+  side: MeteringBlock["side"];
+  revision: {
+    number: number;
+    status: PlanRevision["status"];
+    approvedAt: Date;
+    approvedBy: string;
+    releasedAt: Date | null;
+    releasedBy: string | null;
+    acknowledgedWarnings: unknown;
+  };
+  snapshot: RevisionSnapshot;
+  operations: Operation[];
+  customer: string;
+  tuner: string;
 }
 
 /**
- * Everything the printed traveler of one block shows, for one revision (the job's current one by default).
+ * The record behind the printed traveler of one block, for one revision (the job's current one by default).
  * The job's figures are the revision's snapshot (what was approved), not the job's working inputs.
  * Machinists get travelers only for jobs that reached the shop floor (released or later); tuners and admins
  * get any approved revision. Refuses with 404 when the block, the revision or the block's part in it is
  * missing or when the viewer may not have it (a hidden job is not told apart from a missing one).
  */
-export async function getTravelerData(viewer: Viewer, input: { blockId: string; revision?: number | undefined }): Promise<TravelerData> {
+export async function getTravelerRecord(viewer: Viewer, input: { blockId: string; revision?: number | undefined }): Promise<TravelerRecord> {
   const db = getDb();
   const [found] = await db
     .select({ block: meteringBlocks, job: jobs })
@@ -40,10 +49,7 @@ export async function getTravelerData(viewer: Viewer, input: { blockId: string; 
     .innerJoin(jobs, eq(jobs.id, meteringBlocks.jobId))
     .where(eq(meteringBlocks.id, input.blockId));
   if (!found) throw new RequestRefusal(404, "No such metering block.", "blockId");
-  if (viewer.role === "machinist" && !SHOP_FLOOR_STATES.includes(found.job.state)) {
-    // Answered like a block that does not exist: the bench learns nothing about work not yet released.
-    throw new RequestRefusal(404, "No such metering block.", "blockId");
-  }
+  if (!maySeeJob(viewer, found.job.state)) throw new RequestRefusal(404, "No such metering block.", "blockId");
 
   const number = input.revision ?? found.job.currentRevision;
   const [revision] = await db
@@ -80,30 +86,22 @@ export async function getTravelerData(viewer: Viewer, input: { blockId: string; 
   const [tuner] = await db.select({ name: users.name }).from(users).where(eq(users.id, job.tunerId));
 
   return {
-    job: {
-      number: found.job.number,
-      customer: customer?.name ?? "",
-      carburetor: job.carburetor,
-      displacementM3: job.displacementM3,
-      fuel: fuelName(job),
-      peakBoostPa: job.peakBoostPa,
-    },
-    block: { id: found.block.id, side: found.block.side, mainJetDiameterM: block.mainJetDiameterM, mainJetCount: block.mainJetCount },
+    job: { ...job, number: found.job.number },
+    block,
+    blockId: found.block.id,
+    side: found.block.side,
     revision: {
       number: revision.number,
       status: revision.status,
-      approvedAt: revision.approvedAt.toISOString(),
+      approvedAt: revision.approvedAt,
       approvedBy: revision.approvedBy,
-      releasedAt: revision.releasedAt?.toISOString() ?? null,
+      releasedAt: revision.releasedAt,
       releasedBy: revision.releasedBy ?? null,
-      tuner: tuner?.name ?? "",
+      acknowledgedWarnings: revision.acknowledgedWarnings,
     },
-    operations: travelerOperations(
-      rows,
-      snapshot.plan.blocks.find((b) => b.blockId === input.blockId),
-    ),
-    planNotes: travelerPlanNotes(snapshot.plan.warnings, input.blockId),
-    acknowledgedDangers: Array.isArray(revision.acknowledgedWarnings) ? revision.acknowledgedWarnings.length : 0,
-    benchUrl: benchUrl(found.block.id, revision.number),
+    snapshot,
+    operations: rows,
+    customer: customer?.name ?? "",
+    tuner: tuner?.name ?? "",
   };
 }

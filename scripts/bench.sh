@@ -33,7 +33,7 @@ if [ "$prepare_load" = 1 ]; then
   mkdir -p .data
   (
     DATABASE_URL="$BENCH_DATABASE_URL" npx tsx db/migrate.ts
-    DATABASE_URL="$BENCH_DATABASE_URL" npx tsx --conditions=react-server db/seed.ts
+    DATABASE_URL="$BENCH_DATABASE_URL" npx tsx --conditions=react-server lib/demo/seed.ts
     ensure_build
   ) > .data/bench-prepare.log 2>&1 &
   if wait $!; then

@@ -22,7 +22,7 @@ if [ -z "${DATABASE_URL:-}" ]; then
   export DATABASE_URL="$(local_database_url blockwright)"
 fi
 npx tsx db/migrate.ts
-npx tsx --conditions=react-server db/seed.ts
+npx tsx --conditions=react-server lib/demo/seed.ts
 
 fakes_pid=""
 if [ -z "${SMTP_HOST:-}" ] || [ -z "${S3_ENDPOINT:-}" ]; then

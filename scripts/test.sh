@@ -49,7 +49,7 @@ setsid bash -c '
   set -euo pipefail
   source scripts/common.sh
   DATABASE_URL="$E2E_DATABASE_URL" npx tsx db/migrate.ts
-  DATABASE_URL="$E2E_DATABASE_URL" npx tsx --conditions=react-server db/seed.ts
+  DATABASE_URL="$E2E_DATABASE_URL" npx tsx --conditions=react-server lib/demo/seed.ts
   NEXT_DIST_DIR=.next-test BLOCKWRIGHT_TYPES_CHECKED=1 ensure_build
 ' > .data/e2e-prepare.log 2>&1 &
 background_pid=$!

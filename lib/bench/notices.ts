@@ -1,29 +1,17 @@
 import "server-only";
 import { getBenchView, type SignOffOutcome } from "@/db/bench";
-import { getDb } from "@/db/client";
-import { eq } from "drizzle-orm";
-import { jobs, meteringBlocks, users } from "@/db/schema";
+import { getJobTuner, listJobBlockIds } from "@/db/jobs";
 import { sendMailSafely } from "@/lib/server/mail";
 import { formatMeasurement, formatRange } from "@/lib/format/measurement";
 import { getEnv } from "@/lib/server/env";
 
 // Messages that keep the tuner in step with the bench: a measurement outside plan, and the job done.
 
-async function tunerOf(jobId: string) {
-  const [row] = await getDb()
-    .select({ email: users.email, name: users.name, number: jobs.number })
-    .from(jobs)
-    .innerJoin(users, eq(users.id, jobs.tunerId))
-    .where(eq(jobs.id, jobId));
-  return row;
-}
-
 /** The measured-vs-planned record of every block of the job's current revision, as plain text. */
 export async function benchSummary(jobId: string): Promise<string> {
-  const blocks = await getDb().select({ id: meteringBlocks.id }).from(meteringBlocks).where(eq(meteringBlocks.jobId, jobId));
   const lines: string[] = [];
-  for (const block of blocks) {
-    const view = await getBenchView({ id: "", role: "admin" }, block.id);
+  for (const blockId of await listJobBlockIds(jobId)) {
+    const view = await getBenchView({ id: "", role: "admin" }, blockId);
     if (!view) continue;
     lines.push(`${view.block.side.toUpperCase()} BLOCK (revision ${view.revision.number})`);
     for (const op of view.operations) {
@@ -45,7 +33,7 @@ export async function benchSummary(jobId: string): Promise<string> {
 
 export async function sendSignOffNotices(outcome: SignOffOutcome): Promise<void> {
   if (!outcome.recorded) return;
-  const tuner = await tunerOf(outcome.jobId);
+  const tuner = await getJobTuner(outcome.jobId);
   if (!tuner) return;
   const link = `${getEnv().APP_BASE_URL}/jobs/${outcome.jobId}`;
   if (outcome.failed.length) {

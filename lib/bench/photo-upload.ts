@@ -1,7 +1,7 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
 import { insertAttachment } from "@/db/attachments";
-import type { Viewer } from "@/db/jobs";
+import type { Viewer } from "@/db/visibility";
 import { checkPhoto } from "@/lib/server/images";
 import { deleteObject, putObject } from "@/lib/server/storage";
 

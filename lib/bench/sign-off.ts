@@ -1,6 +1,6 @@
 import "server-only";
 import { signOffOperation, type SignOffOutcome } from "@/db/bench";
-import type { Viewer } from "@/db/jobs";
+import type { Viewer } from "@/db/visibility";
 import { toSI } from "@/lib/engineering/units";
 import type { SignOffInput } from "@/lib/bench/sign-off-schema";
 import { sendSignOffNotices } from "./notices";

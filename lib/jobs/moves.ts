@@ -1,11 +1,10 @@
 import "server-only";
-import { eq } from "drizzle-orm";
 import { renderTravelerPdf } from "@/lib/traveler/pdf/render-traveler";
-import { getDb } from "@/db/client";
-import type { Viewer } from "@/db/jobs";
+import { getJob } from "@/db/jobs";
+import type { Viewer } from "@/db/visibility";
 import { changeJobState } from "@/db/revisions";
-import { jobs, meteringBlocks } from "@/db/schema";
-import { getTravelerData } from "@/db/travelers";
+import { approveRevision } from "./approve";
+import { getTravelerData } from "@/lib/traveler/data";
 import { listActiveUsersByRole } from "@/db/users";
 import { benchUrl } from "@/lib/bench/url";
 import { getEnv } from "@/lib/server/env";
@@ -24,7 +23,7 @@ export async function moveJob(
   to: JobState,
   options: { acknowledgeWarnings?: boolean | undefined } = {},
 ): Promise<{ state: JobState; revision: number }> {
-  const moved = await changeJobState(actor, jobId, to, options);
+  const moved = to === "planned" ? { state: to, ...(await approveRevision(actor, jobId, options)) } : await changeJobState(actor, jobId, to);
   if (moved.state === "released") await sendReleaseNotice(actor, jobId, moved.revision);
   return moved;
 }
@@ -32,16 +31,16 @@ export async function moveJob(
 export async function sendReleaseNotice(actor: Viewer, jobId: string, revision: number): Promise<boolean> {
   const machinists = await listActiveUsersByRole("machinist");
   if (machinists.length === 0) return false;
-  const db = getDb();
-  const [job] = await db.select({ number: jobs.number, carburetor: jobs.carburetor }).from(jobs).where(eq(jobs.id, jobId));
-  const blocks = await db.select({ id: meteringBlocks.id, side: meteringBlocks.side }).from(meteringBlocks).where(eq(meteringBlocks.jobId, jobId));
+  const record = await getJob(actor, jobId);
+  if (!record) return false;
+  const { job, blocks } = record;
   const attachments = [];
   const lines = [];
-  for (const block of blocks.sort((a, b) => a.side.localeCompare(b.side))) {
+  for (const block of [...blocks].sort((a, b) => a.side.localeCompare(b.side))) {
     try {
       const data = await getTravelerData(actor, { blockId: block.id, revision });
       attachments.push({
-        filename: `${job!.number}-${block.side}-rev${revision}.pdf`,
+        filename: `${job.number}-${block.side}-rev${revision}.pdf`,
         content: await renderTravelerPdf(data, { paper: "letter" }),
         contentType: "application/pdf",
       });
@@ -52,9 +51,9 @@ export async function sendReleaseNotice(actor: Viewer, jobId: string, revision: 
   }
   return sendMailSafely({
     to: machinists.map((m) => m.email),
-    subject: `${job!.number} released: revision ${revision} travelers`,
+    subject: `${job.number} released: revision ${revision} travelers`,
     text: [
-      `${job!.number} (${job!.carburetor}) is released to the bench, revision ${revision}.`,
+      `${job.number} (${job.carburetor}) is released to the bench, revision ${revision}.`,
       "",
       "The travelers are attached, one per metering block. Scan a traveler's QR code or open:",
       ...lines,

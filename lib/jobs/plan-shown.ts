@@ -1,10 +1,11 @@
 import "server-only";
 import type { BlockRow, JobRecord } from "@/db/jobs";
-import { getRevisionSnapshot, solveJob } from "@/db/revisions";
+import { getRevisionSnapshot } from "@/db/revisions";
 import type { Job } from "@/db/schema";
 import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
 import { RequestRefusal } from "@/db/refusal";
-import { snapshotJob, snapshotPlan } from "@/lib/jobs/plan";
+import { solveJob } from "./approve";
+import { snapshotJob, snapshotPlan } from "./plan";
 
 /** The plan the job stands on: the job as it was, its blocks and the solved plan, and where it came from. */
 export interface ShownPlan {

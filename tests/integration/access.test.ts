@@ -33,7 +33,7 @@ import { eq, sql } from "drizzle-orm";
 import { changeStateAction, chooseLayoutAction } from "@/app/(office)/jobs/[id]/actions";
 import { updateJobAction } from "@/app/(office)/jobs/[id]/edit/actions";
 import { saveBlocksAction } from "@/app/(office)/jobs/[id]/blocks/actions";
-import { solveJob } from "@/db/revisions";
+import { solveJob } from "@/lib/jobs/approve";
 import { nestedFormData } from "./support/form-fields";
 import { setLengthUnitAction } from "@/app/(office)/reference/actions";
 import { restrictionAction } from "@/app/(office)/reference/calculators/restriction/actions";

@@ -3,7 +3,7 @@
 import { beforeEach, describe, expect, it } from "vitest";
 import { setDrillStockedAction, setDrillSystemStockedAction } from "@/app/(office)/shop/drills/actions";
 import { listStockedLabels } from "@/db/drill-stock";
-import { solveJob } from "@/db/revisions";
+import { solveJob } from "@/lib/jobs/approve";
 import * as schema from "@/db/schema";
 import { actAs, formData, resetDatabase, testDb } from "./support/database";
 import { makeJob } from "./support/jobs";

@@ -1,8 +1,9 @@
 // The solver answers from the shop's rack: take a drill off the rack and a job's plan changes.
 import { beforeEach, describe, expect, it } from "vitest";
-import { createJob, saveJobBlocks, type JobFields, type Viewer } from "@/db/jobs";
+import { createJob, saveJobBlocks, type JobFields } from "@/db/jobs";
+import type { Viewer } from "@/db/visibility";
 import { setDrillStocked } from "@/db/drill-stock";
-import { solveJob } from "@/db/revisions";
+import { solveJob } from "@/lib/jobs/approve";
 import { createJobSchema } from "@/lib/jobs/schema";
 import { jobColumns } from "@/lib/jobs/input";
 import { actAs, resetDatabase } from "./support/database";

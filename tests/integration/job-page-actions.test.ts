@@ -3,7 +3,7 @@ import { beforeEach, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { changeStateAction, chooseLayoutAction } from "@/app/(office)/jobs/[id]/actions";
 import { getJob } from "@/db/jobs";
-import { solveJob } from "@/db/revisions";
+import { solveJob } from "@/lib/jobs/approve";
 import * as schema from "@/db/schema";
 import { actAs, formData, resetDatabase, testDb } from "./support/database";
 import { makeJob } from "./support/jobs";

@@ -11,7 +11,7 @@ import { PNG } from "pngjs";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { GET as travelerRoute } from "@/app/api/blocks/[blockId]/traveler/route";
 import { renderTravelerPdf } from "@/lib/traveler/pdf/render-traveler";
-import { approveRevision } from "@/db/revisions";
+import { approveRevision } from "@/lib/jobs/approve";
 import { updateJob } from "@/db/jobs";
 import * as schema from "@/db/schema";
 import { benchUrl } from "@/lib/bench/url";

@@ -2,7 +2,7 @@ import { sql } from "drizzle-orm";
 import { drizzle } from "drizzle-orm/node-postgres";
 import { Pool } from "pg";
 import * as schema from "@/db/schema";
-import { DEMO_USERS, seedDemoUsers } from "@/db/seed";
+import { DEMO_USERS, seedDemoUsers } from "@/lib/demo/seed";
 import { setSessionUserId } from "./session-double";
 
 const pool = new Pool({ connectionString: process.env.DATABASE_URL, max: 2 });

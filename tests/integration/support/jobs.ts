@@ -1,6 +1,8 @@
 // Job fixtures for the integration tests, in the API's own terms ({ value, unit } quantities).
-import { createJob, saveJobBlocks, type Viewer } from "@/db/jobs";
-import { approveRevision, changeJobState } from "@/db/revisions";
+import { createJob, saveJobBlocks } from "@/db/jobs";
+import type { Viewer } from "@/db/visibility";
+import { changeJobState } from "@/db/revisions";
+import { approveRevision } from "@/lib/jobs/approve";
 import { blockColumns, jobColumns } from "@/lib/jobs/input";
 import { createJobSchema, jobBlocksSchema } from "@/lib/jobs/schema";
 import type { JobFields } from "@/db/jobs";

@@ -1,5 +1,6 @@
 import "server-only";
-import { getJob, type Viewer } from "@/db/jobs";
+import { getJob } from "@/db/jobs";
+import type { Viewer } from "@/db/visibility";
 import { RequestRefusal } from "@/db/refusal";
 import { parseIdParam } from "@/lib/http/route-params";
 

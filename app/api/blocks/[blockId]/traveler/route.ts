@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { renderTravelerPdf } from "@/lib/traveler/pdf/render-traveler";
-import { getTravelerData } from "@/db/travelers";
+import { getTravelerData } from "@/lib/traveler/data";
 import { apiRoute } from "@/lib/http/api-route";
 import { ALL_ROLES } from "@/lib/auth/session";
 import { idParams } from "@/lib/http/route-params";

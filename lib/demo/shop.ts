@@ -3,11 +3,13 @@ import "server-only";
 // verified). Uses the real data layer so the demo follows the same rules as the app.
 import { eq } from "drizzle-orm";
 import { FRACTION_DRILLS, LETTER_DRILLS, NUMBER_DRILLS } from "@/lib/engineering/drills";
-import { getDb } from "./client";
-import { insertCustomer } from "./customers";
-import { createJob, saveJobBlocks, type BlockFields, type JobFields, type StageFields, type Viewer } from "./jobs";
-import { approveRevision, changeJobState } from "./revisions";
-import { customers, measurements, operations, planRevisions, signOffs, stockedDrills, users } from "./schema";
+import { getDb } from "@/db/client";
+import { insertCustomer } from "@/db/customers";
+import { createJob, saveJobBlocks, type BlockFields, type JobFields, type StageFields } from "@/db/jobs";
+import type { Viewer } from "@/db/visibility";
+import { changeJobState } from "@/db/revisions";
+import { approveRevision } from "@/lib/jobs/approve";
+import { customers, measurements, operations, planRevisions, signOffs, stockedDrills, users } from "@/db/schema";
 
 const IN = 0.0254;
 const PSI = 6894.757;

@@ -5,7 +5,7 @@ import bcrypt from "bcryptjs";
 import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
 import path from "node:path";
 import { Pool } from "pg";
-import * as schema from "./schema";
+import * as schema from "@/db/schema";
 
 export const DEMO_PASSWORD = "blockwright-demo";
 
@@ -39,9 +39,9 @@ if (process.argv[1] && path.resolve(process.argv[1]) === path.resolve(import.met
   } finally {
     await pool.end();
   }
-  const { seedDemoShop } = await import("./seed-shop");
+  const { seedDemoShop } = await import("./shop");
   await seedDemoShop();
-  const { closeDb } = await import("./client");
+  const { closeDb } = await import("@/db/client");
   await closeDb();
   console.log("[blockwright] demo data seeded");
 }
