@@ -322,6 +322,54 @@ export const shopSettings = pgTable("shop_settings", {
   minRestrictionDrillLabel: text("min_restriction_drill_label"),
   maxRestrictionDrillLabel: text("max_restriction_drill_label"),
   minWebM: doublePrecision("min_web_m"),
+  /** Dyno logs: throttle above this percent reads as full throttle. */
+  fullThrottleAbovePct: doublePrecision("full_throttle_above_pct"),
+  /** Dyno logs: width of a manifold-pressure bin, Pa. */
+  logBinWidthPa: doublePrecision("log_bin_width_pa"),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
 });
 export type ShopSettings = typeof shopSettings.$inferSelect;
+
+/**
+ * An air-fuel log from the dyno or the street, read against the revision the car ran on. The file itself is in
+ * the object store (storageKey); the row keeps the mapping, the counts, the rows refused and the analysis as
+ * it was made, and, once the tuner accepts corrections, which ones and the revision they go into.
+ */
+export const tuningLogs = pgTable("tuning_logs", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  jobId: uuid("job_id")
+    .notNull()
+    .references(() => jobs.id, { onDelete: "cascade" }),
+  /** The revision the engine ran on while logging. */
+  revisionNumber: integer("revision_number").notNull(),
+  fileName: text("file_name").notNull(),
+  storageKey: text("storage_key").notNull().unique(),
+  byteSize: integer("byte_size").notNull(),
+  mapping: jsonb("mapping").notNull(),
+  totalRows: integer("total_rows").notNull(),
+  usedRows: integer("used_rows").notNull(),
+  /** Readings set aside, by reason ({ fastThrottle, cold }), and blank or repeated rows skipped. */
+  setAside: jsonb("set_aside").notNull(),
+  /** Rows refused: { line, reason }[] (the first 1,000; rejectedCount has them all). */
+  rejected: jsonb("rejected").notNull(),
+  rejectedCount: integer("rejected_count").notNull(),
+  analysis: jsonb("analysis").notNull(),
+  uploadedById: uuid("uploaded_by_id")
+    .notNull()
+    .references(() => users.id),
+  uploadedAt: timestamp("uploaded_at", { withTimezone: true }).notNull().defaultNow(),
+  acceptedById: uuid("accepted_by_id").references(() => users.id),
+  acceptedAt: timestamp("accepted_at", { withTimezone: true }),
+  /** The corrections accepted: { stageId, side, change }[] in the order applied. */
+  acceptedChanges: jsonb("accepted_changes"),
+  /** The revision the accepted corrections go into (the job's next approval). */
+  nextRevisionNumber: integer("next_revision_number"),
+});
+export type TuningLog = typeof tuningLogs.$inferSelect;
+
+/** Column mappings the shop has used, by the file's header, so the next file from the same logger maps itself. */
+export const logMappings = pgTable("log_mappings", {
+  header: text("header").primaryKey(),
+  mapping: jsonb("mapping").notNull(),
+  updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+});

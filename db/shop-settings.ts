@@ -81,3 +81,39 @@ export async function updateShopSettings(actorId: string, input: ShopSettingsInp
     return after;
   });
 }
+
+/** Dyno-log reading: full throttle above this throttle opening, and the manifold-pressure bin width. */
+export interface LogSettings {
+  fullThrottleAbovePct: number;
+  binWidthPa: number;
+  isDefault: { fullThrottleAbovePct: boolean; binWidthPa: boolean };
+}
+
+export async function getLogSettings(defaults: { fullThrottleAbovePct: number; binWidthPa: number }): Promise<LogSettings> {
+  const [row] = await getDb()
+    .select({ fullThrottleAbovePct: shopSettings.fullThrottleAbovePct, binWidthPa: shopSettings.logBinWidthPa })
+    .from(shopSettings)
+    .where(eq(shopSettings.id, SETTINGS_ID));
+  return {
+    fullThrottleAbovePct: row?.fullThrottleAbovePct ?? defaults.fullThrottleAbovePct,
+    binWidthPa: row?.binWidthPa ?? defaults.binWidthPa,
+    isDefault: { fullThrottleAbovePct: row?.fullThrottleAbovePct == null, binWidthPa: row?.binWidthPa == null },
+  };
+}
+
+/** Saves the dyno-log settings (null: the default), with an audit line of before and after. */
+export async function updateLogSettings(actorId: string, input: { fullThrottleAbovePct: number | null; binWidthPa: number | null }): Promise<void> {
+  await getDb().transaction(async (tx) => {
+    const [before] = await tx
+      .select({ fullThrottleAbovePct: shopSettings.fullThrottleAbovePct, binWidthPa: shopSettings.logBinWidthPa })
+      .from(shopSettings)
+      .where(eq(shopSettings.id, SETTINGS_ID))
+      .for("update");
+    const values = { fullThrottleAbovePct: input.fullThrottleAbovePct, logBinWidthPa: input.binWidthPa, updatedAt: new Date() };
+    await tx
+      .insert(shopSettings)
+      .values({ id: SETTINGS_ID, ...values })
+      .onConflictDoUpdate({ target: shopSettings.id, set: values });
+    await recordAudit(tx, actorId, "shop-settings.logs", String(SETTINGS_ID), { before: before ?? null, after: input }, "shop-settings");
+  });
+}

@@ -94,6 +94,7 @@ const TRAVELER: TravelerData = {
   operations: travelerOperations(TRAVELER_BLOCK.operations, TRAVELER_BLOCK),
   planNotes: [],
   acknowledgedDangers: 0,
+  changes: null,
   benchUrl: `http://127.0.0.1:3000/bench/${TRAVELER_BLOCK.blockId}?revision=1`,
 };
 

@@ -1,6 +1,7 @@
 import "server-only";
 import { fuelProperties } from "@/lib/engineering/fuels";
 import type { Job } from "@/db/schema";
+import { listChangesInto } from "@/db/tuning-logs";
 import { getTravelerRecord } from "@/db/travelers";
 import type { Viewer } from "@/db/visibility";
 import { benchUrl } from "@/lib/bench/url";
@@ -24,6 +25,8 @@ function fuelName(job: Job): string {
 export async function getTravelerData(viewer: Viewer, input: { blockId: string; revision?: number | undefined }): Promise<TravelerData> {
   const record = await getTravelerRecord(viewer, input);
   const { job, block, revision, snapshot } = record;
+  const accepted = (await listChangesInto(job.id, revision.number)).flatMap((log) => log.changes.map((c) => ({ ...c, fromRevision: log.fromRevision })));
+  const ordered = [...accepted.filter((c) => c.side === record.side), ...accepted.filter((c) => c.side !== record.side)];
   return {
     job: {
       number: job.number,
@@ -48,6 +51,7 @@ export async function getTravelerData(viewer: Viewer, input: { blockId: string; 
       snapshot.plan.blocks.find((b) => b.blockId === record.blockId),
     ),
     planNotes: travelerPlanNotes(snapshot.plan.warnings, record.blockId),
+    changes: ordered.length ? { fromRevision: Math.min(...ordered.map((c) => c.fromRevision)), lines: ordered.map((c) => c.change) } : null,
     acknowledgedDangers: Array.isArray(revision.acknowledgedWarnings) ? revision.acknowledgedWarnings.length : 0,
     benchUrl: benchUrl(record.blockId, revision.number),
   };

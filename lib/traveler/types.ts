@@ -65,6 +65,8 @@ export interface TravelerData {
    */
   planNotes: { level: "notice" | "caution" | "warning" | "danger"; message: string }[];
   acknowledgedDangers: number;
+  /** Changes accepted from air-fuel logs into this revision, as the machinist reads them (this block's first). */
+  changes: { fromRevision: number; lines: string[] } | null;
   /** Absolute URL the QR code opens: the bench page of this block in this revision. */
   benchUrl: string;
 }

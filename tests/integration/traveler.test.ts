@@ -250,6 +250,7 @@ describe("a long traveler", () => {
       operations,
       planNotes: [],
       acknowledgedDangers: 0,
+      changes: null,
       benchUrl: "https://bench.blockwright.test/bench/7d0c8a52-93d1-4f4e-8f7a-3c2b1a0e9d11?revision=3",
     };
     const file = await savePdf(await renderTravelerPdf(data, { paper: "a4" }));
