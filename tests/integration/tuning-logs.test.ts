@@ -43,7 +43,7 @@ const MAPPING = {
   throttle: { column: "TPS" },
 };
 
-const params = (id: string, logId?: string) => ({ params: Promise.resolve(logId ? { id, logId } : { id }) });
+const params = (id: string, logId?: string) => ({ params: Promise.resolve<Record<string, string>>(logId ? { id, logId } : { id }) });
 
 function uploadRequest(jobId: string, csv: string, mapping: unknown = MAPPING, path = "logs"): Request {
   const form = new FormData();

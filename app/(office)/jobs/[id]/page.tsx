@@ -1,6 +1,8 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { getJob } from "@/db/jobs";
+import { listTuningLogs } from "@/db/tuning-logs";
+import { SHOP_FLOOR_STATES } from "@/db/visibility";
 import { ALL_ROLES, OFFICE_ROLES, requireRole } from "@/lib/auth/session";
 import { RequestRefusal } from "@/db/refusal";
 import { JOB_STATE_LABELS } from "@/db/job-states";
@@ -12,6 +14,7 @@ import { BlockList } from "./_plan/block-list";
 import { EngineSummary } from "./_plan/engine-summary";
 import { PlanView } from "./_plan/plan-view";
 import { changeStateAction, chooseLayoutAction } from "./actions";
+import { LogsPanel } from "./logs-panel";
 import { RevisionsPanel } from "./revisions-panel";
 import { TravelersPanel } from "./travelers-panel";
 import { StateControls } from "./state-controls";
@@ -45,6 +48,7 @@ export default async function JobPage({ params }: Params) {
   }
   const choose = office && job.state === "draft" ? chooseLayoutAction.bind(null, job.id) : undefined;
   const moves = office ? officeMoves(job.state, job.currentRevision + 1) : [];
+  const logs = office ? await listTuningLogs(job.id) : [];
 
   return (
     <>
@@ -95,6 +99,9 @@ export default async function JobPage({ params }: Params) {
         </Sheet>
         <div className="flex flex-col gap-6">
           <RevisionsPanel jobId={job.id} revisions={record.revisions} />
+          {office && job.currentRevision > 0 ? (
+            <LogsPanel jobId={job.id} logs={logs} canRead={SHOP_FLOOR_STATES.includes(job.state)} />
+          ) : null}
           {job.currentRevision > 0 && record.blocks.length ? (
             <TravelersPanel revision={job.currentRevision} blocks={record.blocks.map((b) => ({ id: b.id, side: b.side }))} />
           ) : null}

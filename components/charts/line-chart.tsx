@@ -1,0 +1,142 @@
+// A small line-and-point chart drawn as SVG on the server: nothing to load or run on the client, and the
+// figures it shows are also given in a table beside it (the chart is a picture of the table, not its only copy).
+
+const INK = "var(--color-ink)";
+const RULE = "var(--color-rule)";
+const GRAPHITE = "var(--color-graphite)";
+
+export interface ChartLine {
+  label: string;
+  points: readonly (readonly [number, number])[];
+  color: string;
+  dashed?: boolean;
+}
+
+export interface ChartPoint {
+  x: number;
+  y: number;
+  /** Hollow: too few readings to count. */
+  hollow?: boolean;
+  color: string;
+  label: string;
+}
+
+export interface ChartMarker {
+  x: number;
+  label: string;
+}
+
+const W = 640;
+const H = 280;
+const M = { left: 52, right: 16, top: 16, bottom: 40 };
+
+function ticks(lo: number, hi: number, count: number): number[] {
+  const raw = (hi - lo) / count;
+  const mag = 10 ** Math.floor(Math.log10(raw));
+  const step = [1, 2, 2.5, 5, 10].map((f) => f * mag).find((s) => s >= raw) ?? raw;
+  const out = [];
+  for (let v = Math.ceil(lo / step) * step; v <= hi + step * 1e-9; v += step) out.push(Number(v.toFixed(6)));
+  return out;
+}
+
+export function LineChart({
+  title,
+  description,
+  xLabel,
+  yLabel,
+  lines,
+  points,
+  markers = [],
+  yDecimals = 2,
+}: {
+  title: string;
+  description: string;
+  xLabel: string;
+  yLabel: string;
+  lines: readonly ChartLine[];
+  points: readonly ChartPoint[];
+  markers?: readonly ChartMarker[];
+  yDecimals?: number;
+}) {
+  const xs = [...lines.flatMap((l) => l.points.map((p) => p[0])), ...points.map((p) => p.x), ...markers.map((m) => m.x)];
+  const ys = [...lines.flatMap((l) => l.points.map((p) => p[1])), ...points.map((p) => p.y)];
+  if (xs.length === 0 || ys.length === 0) return null;
+  const [x0, x1] = [Math.min(...xs), Math.max(...xs)];
+  const pad = (Math.max(...ys) - Math.min(...ys)) * 0.1 || 0.05;
+  const [y0, y1] = [Math.min(...ys) - pad, Math.max(...ys) + pad];
+  const sx = (x: number) => M.left + ((x - x0) / (x1 - x0 || 1)) * (W - M.left - M.right);
+  const sy = (y: number) => H - M.bottom - ((y - y0) / (y1 - y0 || 1)) * (H - M.top - M.bottom);
+  const id = title.replace(/[^a-z0-9]+/gi, "-").toLowerCase();
+  return (
+    <figure className="flex flex-col gap-2">
+      <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-labelledby={`${id}-title ${id}-desc`} className="h-auto w-full max-w-3xl">
+        <title id={`${id}-title`}>{title}</title>
+        <desc id={`${id}-desc`}>{description}</desc>
+        {ticks(y0, y1, 5).map((t) => (
+          <g key={`y${t}`}>
+            <line x1={M.left} x2={W - M.right} y1={sy(t)} y2={sy(t)} stroke={RULE} />
+            <text x={M.left - 6} y={sy(t) + 4} textAnchor="end" fontSize="11" fill={GRAPHITE}>
+              {t.toFixed(yDecimals)}
+            </text>
+          </g>
+        ))}
+        {ticks(x0, x1, 8).map((t) => (
+          <g key={`x${t}`}>
+            <line x1={sx(t)} x2={sx(t)} y1={H - M.bottom} y2={H - M.bottom + 4} stroke={INK} />
+            <text x={sx(t)} y={H - M.bottom + 16} textAnchor="middle" fontSize="11" fill={GRAPHITE}>
+              {t}
+            </text>
+          </g>
+        ))}
+        <line x1={M.left} x2={W - M.right} y1={H - M.bottom} y2={H - M.bottom} stroke={INK} />
+        <text x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle" fontSize="12" fill={INK}>
+          {xLabel}
+        </text>
+        <text x={14} y={(M.top + H - M.bottom) / 2} textAnchor="middle" fontSize="12" fill={INK} transform={`rotate(-90 14 ${(M.top + H - M.bottom) / 2})`}>
+          {yLabel}
+        </text>
+        {markers.map((m, i) => (
+          <g key={`m${i}`}>
+            <line x1={sx(m.x)} x2={sx(m.x)} y1={M.top} y2={H - M.bottom} stroke={GRAPHITE} strokeDasharray="2 3" />
+            <text x={sx(m.x) + 3} y={M.top + 10 + (i % 3) * 12} fontSize="10" fill={GRAPHITE}>
+              {m.label}
+            </text>
+          </g>
+        ))}
+        {lines.map((l) => (
+          <polyline
+            key={l.label}
+            points={l.points.map(([x, y]) => `${sx(x).toFixed(1)},${sy(y).toFixed(1)}`).join(" ")}
+            fill="none"
+            stroke={l.color}
+            strokeWidth={2}
+            strokeDasharray={l.dashed ? "6 4" : undefined}
+          />
+        ))}
+        {points.map((p, i) => (
+          <circle key={`p${i}`} cx={sx(p.x)} cy={sy(p.y)} r={4.5} fill={p.hollow ? "white" : p.color} stroke={p.color} strokeWidth={2}>
+            <title>{p.label}</title>
+          </circle>
+        ))}
+      </svg>
+      <figcaption className="flex flex-wrap gap-4 text-xs text-graphite">
+        {lines.map((l) => (
+          <span key={l.label} className="inline-flex items-center gap-1">
+            <svg width="24" height="8" aria-hidden="true">
+              <line x1="0" x2="24" y1="4" y2="4" stroke={l.color} strokeWidth="2" strokeDasharray={l.dashed ? "6 4" : undefined} />
+            </svg>
+            {l.label}
+          </span>
+        ))}
+        {points.length ? (
+          <span className="inline-flex items-center gap-1">
+            <svg width="10" height="10" aria-hidden="true">
+              <circle cx="5" cy="5" r="4" fill={points[0]!.color} />
+            </svg>
+            readings (median of a bin; hollow: too few to count)
+          </span>
+        ) : null}
+      </figcaption>
+    </figure>
+  );
+}
