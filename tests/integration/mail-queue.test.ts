@@ -1,7 +1,7 @@
 // Outgoing mail waits in a queue in PostgreSQL: an action succeeds while the SMTP server is down, the message is
 // tried again with a growing wait, and it is delivered once the server answers. The admin sees each message's state.
 import { createServer, type AddressInfo } from "node:net";
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { renderToStaticMarkup } from "react-dom/server";
 import { simpleParser, type ParsedMail } from "mailparser";
 import { SMTPServer } from "smtp-server";
@@ -96,6 +96,10 @@ describe("mail while the SMTP server is down", () => {
     expect(retrying).toMatchObject({ to: "tuner@blockwright.test", tries: 1, maxTries: 3 });
     expect(retrying.lastError).toMatch(/ECONNREFUSED/);
     expect(received).toHaveLength(0);
+    // The link is in the queue's table only sealed: a copy of the database does not hand out a reset link.
+    const stored = await testDb.execute<{ data: string }>(sql`SELECT data::text AS data FROM pgboss.job WHERE id = ${retrying.id}::uuid`);
+    expect(stored.rows[0]!.data).toContain("tuner@blockwright.test");
+    expect(stored.rows[0]!.data).not.toContain("reset-password");
 
     await smtpUp();
     const sent = await waitFor("Set a new Blockwright password", (m) => m.state === "sent");
