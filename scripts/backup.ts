@@ -9,7 +9,7 @@ process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= "true";
 const outDir = path.resolve(process.argv[2] ?? "backups");
 try {
   const { archive, manifest } = await createBackup({ target: targetFromEnv(), outDir });
-  console.log(`[backup] ${archive}: database ${manifest.database.name} (${manifest.database.bytes} bytes), ${manifest.objects.length} objects from bucket ${manifest.bucket}`);
+  console.log(`[backup] ${archive}: database ${manifest.database.name} (${manifest.database.bytes} bytes), ${manifest.objects.length} ${manifest.objects.length === 1 ? "object" : "objects"} from bucket ${manifest.bucket}`);
 } catch (error) {
   console.error(`[backup] ${(error as Error).message}`);
   process.exitCode = 1;

@@ -14,7 +14,7 @@ if (!archive) {
 try {
   const target = targetFromEnv();
   const manifest = await restoreBackup({ archive: path.resolve(archive), target });
-  console.log(`[restore] ${archive} (made ${manifest.createdAt}): database ${manifest.database.name} and ${manifest.objects.length} objects restored into bucket ${target.storage.bucket}`);
+  console.log(`[restore] ${archive} (made ${manifest.createdAt}): database ${manifest.database.name} and ${manifest.objects.length} ${manifest.objects.length === 1 ? "object" : "objects"} restored into bucket ${target.storage.bucket}`);
 } catch (error) {
   console.error(`[restore] ${(error as Error).message}`);
   process.exitCode = 1;
