@@ -88,6 +88,9 @@ export default defineConfig({
         NEXTAUTH_URL: baseURL,
         SMTP_HOST: "127.0.0.1",
         S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
+        // Mail leaves through the queue's worker: look for it every half second, so the outbox has it by the
+        // time a spec opens the page.
+        MAIL_POLL_SECONDS: "0.5",
       },
     },
   ],

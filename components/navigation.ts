@@ -47,6 +47,12 @@ export const PLACES: NavLink[] = [
     roles: ["admin"],
   },
   {
+    href: "/shop/outbox/queue",
+    label: "Mail queue",
+    purpose: "Every message waiting for the SMTP server, sent, or given up on, with the last error.",
+    roles: ["admin"],
+  },
+  {
     href: "/account",
     label: "Account",
     purpose: "Your password, and signing out on every device at once.",

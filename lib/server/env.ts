@@ -15,6 +15,11 @@ const envSchema = z.object({
   SMTP_PASSWORD: z.string().optional(),
   MAIL_FROM: z.string().default("Blockwright <no-reply@blockwright.test>"),
   MAIL_OUTBOX_DIR: z.string().default(".data/outbox"),
+  // The mail queue (pg-boss, schema pgboss): how often a failed message is tried again, the first wait between
+  // tries (doubling, with jitter, after each), and how often the worker looks for new messages.
+  MAIL_RETRY_LIMIT: z.coerce.number().int().min(0, { error: "MAIL_RETRY_LIMIT must be 0 or more" }).max(20).default(5),
+  MAIL_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1, { error: "MAIL_RETRY_DELAY_SECONDS must be at least 1" }).default(60),
+  MAIL_POLL_SECONDS: z.coerce.number().min(0.5, { error: "MAIL_POLL_SECONDS must be at least 0.5" }).default(2),
   S3_ENDPOINT: z.url().default("http://127.0.0.1:4569"),
   S3_REGION: z.string().default("us-east-1"),
   S3_BUCKET: z.string().default("blockwright"),

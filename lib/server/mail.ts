@@ -1,47 +1,26 @@
 import "server-only";
-import nodemailer, { type Transporter } from "nodemailer";
-import type Mail from "nodemailer/lib/mailer";
-import { getEnv } from "./env";
 import { log } from "./log";
+import { enqueueMail } from "./mail-queue";
+import type { Message } from "./mail-transport";
 
-// Outgoing mail through nodemailer: the local SMTP fake in development and tests, any SMTP server in
-// production (SMTP_HOST, SMTP_PORT, SMTP_USER, SMTP_PASSWORD).
+// What the workflows call to send mail. Both put the message in the mail queue (mail-queue.ts) and return at
+// once: an SMTP server that is down delays the message, it never fails the user's action or loses the message.
 
-let transporter: Transporter | undefined;
+export type { MailAttachment, Message } from "./mail-transport";
 
-function transport(): Transporter {
-  if (!transporter) {
-    const env = getEnv();
-    transporter = nodemailer.createTransport({
-      host: env.SMTP_HOST,
-      port: env.SMTP_PORT,
-      secure: false,
-      ignoreTLS: env.SMTP_HOST === "127.0.0.1" || env.SMTP_HOST === "localhost",
-      auth: env.SMTP_USER ? { user: env.SMTP_USER, pass: env.SMTP_PASSWORD ?? "" } : undefined,
-    });
-  }
-  return transporter;
-}
-
-export interface Message {
-  to: string[];
-  subject: string;
-  text: string;
-  attachments?: Mail.Attachment[];
-}
-
+/** Queues the message; throws only when the queue itself (the database) cannot take it. */
 export async function sendMail(message: Message): Promise<void> {
   if (message.to.length === 0) return;
-  await transport().sendMail({ from: getEnv().MAIL_FROM, ...message });
+  await enqueueMail(message);
 }
 
-/** Sends without letting a mail failure undo work already saved; the failure is logged. */
+/** Queues without letting a failure undo work already saved; the failure is logged. */
 export async function sendMailSafely(message: Message): Promise<boolean> {
   try {
     await sendMail(message);
     return true;
   } catch (error) {
-    log.error({ err: error, subject: message.subject }, "mail not sent");
+    log.error({ err: error, subject: message.subject }, "mail not queued");
     return false;
   }
 }

@@ -6,18 +6,23 @@ import { signOffAction } from "@/app/bench/[blockId]/actions";
 import { PATCH as patchJobRoute } from "@/app/api/jobs/[id]/route";
 import { POST as jobStateRoute } from "@/app/api/jobs/[id]/state/route";
 import { actAs, jsonRequest, resetDatabase, testDb } from "./support/database";
+import { mailSettled, startMailWorker } from "./support/mail-queue";
 import { startMailFake, type MailFake } from "./support/fakes";
 import { makeJob } from "./support/jobs";
 
 let mail: MailFake;
 beforeAll(async () => {
   mail = await startMailFake();
+  // Mail goes through the queue: the worker the server would start sends it.
+  await startMailWorker();
 });
 afterAll(async () => {
   await mail.stop();
 });
 beforeEach(async () => {
   await resetDatabase();
+  // Whatever an earlier test queued is delivered before the count starts again.
+  await mailSettled();
   mail.messages.length = 0;
 });
 

@@ -8,6 +8,7 @@ import { GET as photoRoute } from "@/app/api/photos/[id]/route";
 import { POST as stateRoute } from "@/app/api/jobs/[id]/state/route";
 import { MAX_PHOTO_BYTES } from "@/lib/server/images";
 import { actAs, jsonRequest, resetDatabase, testDb } from "./support/database";
+import { mailSettled, startMailWorker } from "./support/mail-queue";
 import { startMailFake, startS3Fake, type MailFake, type S3Fake } from "./support/fakes";
 import { makeJob } from "./support/jobs";
 
@@ -16,6 +17,9 @@ let s3: S3Fake;
 beforeAll(async () => {
   mail = await startMailFake();
   s3 = await startS3Fake();
+  // Mail goes through the queue: the worker the server would start sends it. Started after the fakes, which
+  // set the configuration it reads.
+  await startMailWorker();
 });
 afterAll(async () => {
   await mail.stop();
@@ -23,6 +27,8 @@ afterAll(async () => {
 });
 beforeEach(async () => {
   await resetDatabase();
+  // Whatever an earlier test queued is delivered before the count starts again.
+  await mailSettled();
   mail.messages.length = 0;
 });
 

@@ -13,6 +13,7 @@ import { verifyCredentials } from "@/lib/auth/credentials";
 import { resetPassword } from "@/lib/auth/passwords";
 import * as schema from "@/db/schema";
 import { actAs, formData, jsonRequest, resetDatabase, testDb } from "./support/database";
+import { mailSettled, startMailWorker } from "./support/mail-queue";
 import { startMailFake, type MailFake } from "./support/fakes";
 import { settle } from "./support/redirect";
 import { setSessionUserId } from "./support/session-double";
@@ -20,10 +21,14 @@ import { setSessionUserId } from "./support/session-double";
 let mail: MailFake;
 beforeAll(async () => {
   mail = await startMailFake();
+  // Mail goes through the queue: the worker the server would start sends it.
+  await startMailWorker();
 });
 afterAll(async () => mail.stop());
 beforeEach(async () => {
   await resetDatabase();
+  // Whatever an earlier test queued is delivered before the count starts again.
+  await mailSettled();
   mail.messages.length = 0;
 });
 

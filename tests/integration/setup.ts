@@ -2,12 +2,16 @@
 // from a migrated template by global-setup.ts. Only the edges Next.js owns are replaced: the session
 // lookup and the cache.
 import { tmpdir } from "node:os";
-import { inject, vi } from "vitest";
+import { afterAll, inject, vi } from "vitest";
 import { claimWorkerDatabase } from "./support/claim-database";
 
 process.env.NEXTAUTH_SECRET ??= "integration-test-secret-0123456789";
 // The outbox page reads the mail fake's folder: tests get their own, never the developer's .data/outbox.
 process.env.MAIL_OUTBOX_DIR ??= `${tmpdir()}/blockwright-it-outbox-${process.pid}`;
+// The mail queue's worker looks for messages every half second and tries a failed one again after a second or
+// two (the least pg-boss allows), so tests wait on mail for seconds, not minutes.
+process.env.MAIL_POLL_SECONDS ??= "0.5";
+process.env.MAIL_RETRY_DELAY_SECONDS ??= "1";
 // Before anything reads the configuration: this worker's database, not the base one named in DATABASE_URL.
 const baseDatabaseUrl = process.env.DATABASE_URL;
 if (!baseDatabaseUrl) {
@@ -25,3 +29,9 @@ vi.mock("next/cache", () => ({
   revalidatePath: vi.fn(),
   revalidateTag: vi.fn(),
 }));
+
+// A file that queued mail has opened the queue's connections (and perhaps its worker): close them with the file.
+afterAll(async () => {
+  const { stopMailQueue } = await import("@/lib/server/mail-queue");
+  await stopMailQueue();
+});

@@ -14,7 +14,15 @@ export default async function OutboxPage() {
   const { folderExists, messages } = await listOutbox();
   return (
     <>
-      <PageHeader kicker="Shop" title="Outbox" />
+      <PageHeader
+        kicker="Shop"
+        title="Outbox"
+        actions={
+          <Link href="/shop/outbox/queue" className="text-accent underline-offset-2 hover:underline">
+            Mail queue
+          </Link>
+        }
+      />
       <p className="mb-4 max-w-3xl text-sm text-graphite">
         Every message Blockwright sent through the local mail fake, read from <code className="numeric">{outboxDir()}</code>. Nothing here
         left the machine.
