@@ -5,7 +5,8 @@ import { eq } from "drizzle-orm";
 import { jobs, meteringBlocks, users } from "@/db/schema";
 import { sendMailSafely } from "@/lib/server/mail";
 import { formatMeasurement, formatRange } from "@/lib/format/measurement";
-import { getEnv } from "@/lib/server/env";
+import { formatDateTime } from "@/lib/format/dates";
+import { getEnv, shopTimeZone } from "@/lib/server/env";
 
 // Messages that keep the tuner in step with the bench: a measurement outside plan, and the job done.
 
@@ -22,12 +23,13 @@ async function tunerOf(jobId: string) {
 export async function benchSummary(jobId: string): Promise<string> {
   const blocks = await getDb().select({ id: meteringBlocks.id }).from(meteringBlocks).where(eq(meteringBlocks.jobId, jobId));
   const lines: string[] = [];
+  const timeZone = shopTimeZone();
   for (const block of blocks) {
     const view = await getBenchView({ id: "", role: "admin" }, block.id);
     if (!view) continue;
     lines.push(`${view.block.side.toUpperCase()} BLOCK (revision ${view.revision.number})`);
     for (const op of view.operations) {
-      lines.push(`  ${op.number}  ${op.title}: ${op.signOff ? `signed by ${op.signOff.by}` : "NOT SIGNED"}`);
+      lines.push(`  ${op.number}  ${op.title}: ${op.signOff ? `signed by ${op.signOff.by} at ${formatDateTime(op.signOff.at, timeZone)}` : "NOT SIGNED"}`);
       for (const planned of op.planned) {
         const measured = op.recorded.find((r) => r.key === planned.key);
         lines.push(

@@ -8,11 +8,12 @@ import {
   type SortingState,
   type Updater,
 } from "@tanstack/react-table";
+import { useMemo } from "react";
 import type { JobListRow } from "@/db/jobs";
 import type { JobState } from "@/db/job-states";
 import { Button } from "@/components/ui/button";
 import { hasFilters, JOB_SORT_KEYS, JOBS_PAGE_SIZE, type JobSortKey } from "./list-view";
-import { JOB_COLUMNS } from "./_components/job-columns";
+import { jobColumns } from "./_components/job-columns";
 import { JobFilterBar, useSearchText, type FilterId } from "./_components/job-filter-bar";
 import { JobsTableBody } from "./_components/jobs-table-body";
 import { useJobList, type Choice } from "./_components/use-job-list";
@@ -30,7 +31,19 @@ function resolve<T>(updater: Updater<T>, current: T): T {
   return typeof updater === "function" ? (updater as (old: T) => T)(current) : updater;
 }
 
-export function JobsTable({ customers, tuners, shopFloorOnly }: { customers: Choice[]; tuners: Choice[]; shopFloorOnly: boolean }) {
+export function JobsTable({
+  customers,
+  tuners,
+  shopFloorOnly,
+  timeZone,
+}: {
+  customers: Choice[];
+  tuners: Choice[];
+  shopFloorOnly: boolean;
+  /** The shop's time zone (SHOP_TIME_ZONE, from the server page): the Updated column prints in it. */
+  timeZone: string;
+}) {
+  const columns = useMemo(() => jobColumns(timeZone), [timeZone]);
   const { view, show, query } = useJobList(customers, tuners);
   const { text, onSearchInput, clearFilters } = useSearchText(view, show);
 
@@ -46,7 +59,7 @@ export function JobsTable({ customers, tuners, shopFloorOnly }: { customers: Cho
   // eslint-disable-next-line react-hooks/incompatible-library -- the table instance is used in this render only
   const table = useReactTable({
     data: query.data?.jobs ?? NO_ROWS,
-    columns: JOB_COLUMNS,
+    columns,
     getCoreRowModel: getCoreRowModel(),
     manualSorting: true,
     manualFiltering: true,

@@ -34,9 +34,11 @@ export interface TravelerDocumentProps {
   paper: PaperSize;
   /** ISO timestamp printed in the footer. */
   printedAt: string;
+  /** The shop's time zone (SHOP_TIME_ZONE): dates print as the shop's calendar days. */
+  timeZone: string;
 }
 
-export function TravelerDocument({ data, qr, paper, printedAt }: TravelerDocumentProps) {
+export function TravelerDocument({ data, qr, paper, printedAt, timeZone }: TravelerDocumentProps) {
   const superseded = data.revision.status === "superseded";
   const title = `${data.job.number} ${data.block.side} block, revision ${data.revision.number}`;
   return (
@@ -44,7 +46,7 @@ export function TravelerDocument({ data, qr, paper, printedAt }: TravelerDocumen
       <Page size={PAGE_SIZE[paper]} style={s.page}>
         {/* First, so that everything (the QR code's white ground above all) is painted over it. */}
         {superseded ? <SupersededWatermark /> : null}
-        <Header data={data} />
+        <Header data={data} timeZone={timeZone} />
         <Facts data={data} />
         <View style={s.intro} wrap={false}>
           <BenchCautions />
@@ -55,7 +57,7 @@ export function TravelerDocument({ data, qr, paper, printedAt }: TravelerDocumen
           <Operation key={op.number} op={op} lead={i === 0 ? "Operations, in order" : undefined} />
         ))}
         <BlockCheck side={data.block.side} />
-        <Footer data={data} printedAt={printedAt} />
+        <Footer data={data} printedAt={printedAt} timeZone={timeZone} />
       </Page>
     </Document>
   );

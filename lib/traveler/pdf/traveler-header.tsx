@@ -1,6 +1,7 @@
 import { StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { ReactNode } from "react";
-import { displacement, isoDate, lengthBoth, psi } from "@/lib/traveler/format";
+import { formatDate } from "@/lib/format/dates";
+import { displacement, lengthBoth, psi } from "@/lib/traveler/format";
 import type { TravelerData } from "@/lib/traveler/types";
 import { FIGURE_FACE } from "./fonts";
 import { INK, MARGIN, PAPER } from "./traveler-style";
@@ -65,7 +66,8 @@ export function SupersededWatermark() {
   );
 }
 
-export function Header({ data }: { data: TravelerData }) {
+/** `timeZone` is the shop's: the dates printed are the shop's calendar days. */
+export function Header({ data, timeZone }: { data: TravelerData; timeZone: string }) {
   const { job, block, revision } = data;
   const superseded = revision.status === "superseded";
   return (
@@ -93,10 +95,10 @@ export function Header({ data }: { data: TravelerData }) {
       </View>
       <Text style={s.metaRow}>
         <Text style={s.metaLabel}>Released </Text>
-        {revision.releasedAt ? `${isoDate(revision.releasedAt)} by ${revision.releasedBy ?? "—"}` : "not yet"}
+        {revision.releasedAt ? `${formatDate(revision.releasedAt, timeZone)} by ${revision.releasedBy ?? "—"}` : "not yet"}
         {"   ·   "}
         <Text style={s.metaLabel}>Approved </Text>
-        {`${isoDate(revision.approvedAt)} by ${revision.approvedBy}`}
+        {`${formatDate(revision.approvedAt, timeZone)} by ${revision.approvedBy}`}
         {"   ·   "}
         <Text style={s.metaLabel}>Tuner </Text>
         {revision.tuner}
@@ -155,11 +157,11 @@ export function Facts({ data }: { data: TravelerData }) {
   );
 }
 
-export function Footer({ data, printedAt }: { data: TravelerData; printedAt: string }) {
+export function Footer({ data, printedAt, timeZone }: { data: TravelerData; printedAt: string; timeZone: string }) {
   return (
     <View style={s.footer} fixed>
       <Text style={s.footerText}>
-        {data.job.number} · {data.block.side} block · revision {data.revision.number} · printed {isoDate(printedAt)} · the code shows whether this is still the current revision
+        {data.job.number} · {data.block.side} block · revision {data.revision.number} · printed {formatDate(printedAt, timeZone)} · the code shows whether this is still the current revision
       </Text>
       <Text style={s.pageNumber} render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
     </View>

@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import { planConversion, type BlockInput, type EngineInput } from "@/lib/engineering/conversion-plan";
 import { ALL_DRILLS } from "@/lib/engineering/drills";
 import { GASOLINE } from "@/lib/engineering/fuels";
-import { acceptance, displacement, isoDate, measured } from "@/lib/traveler/format";
+import { formatDate } from "@/lib/format/dates";
+import { acceptance, displacement, measured } from "@/lib/traveler/format";
 import { travelerOperations } from "@/lib/traveler/operations";
 
 const IN = 0.0254; // exact, NIST SP 811
@@ -108,6 +109,6 @@ describe("traveler figures", () => {
     expect(displacement(5.7e-3)).toBe("5.70 L · 348 in³");
     expect(measured("pressure", 8 * PSI)).toEqual({ main: "8.0 psi", other: "55.2 kPa" });
     expect(measured("length", 0.089 * IN)).toEqual({ main: "0.0890 in", other: "2.261 mm" });
-    expect(isoDate("2025-06-02T08:00:00.000Z")).toBe("2025-06-02");
+    expect(formatDate("2025-06-02T08:00:00.000Z", "UTC")).toBe("2025-06-02");
   });
 });
