@@ -3,7 +3,8 @@ import { createHash, randomBytes } from "node:crypto";
 import bcrypt from "bcryptjs";
 import { consumePasswordReset, createPasswordReset, getPasswordResetHolder } from "@/db/password-resets";
 import { endSessions, getPasswordHash, setPasswordHash } from "@/db/users";
-import { getEnv } from "@/lib/server/env";
+import { formatDateTime } from "@/lib/format/dates";
+import { getEnv, shopTimeZone } from "@/lib/server/env";
 import { RequestRefusal } from "@/db/refusal";
 import { sendMail, sendMailSafely } from "@/lib/server/mail";
 import { passwordProblem } from "@/lib/auth/password-policy";
@@ -58,12 +59,8 @@ export async function signOutEverywhere(user: SessionUser): Promise<void> {
 /** An admin mails a person a single-use link to set a new password; only the token's hash is kept. */
 export async function sendPasswordReset(admin: SessionUser, userId: string, now = new Date()): Promise<void> {
   const token = randomBytes(32).toString("base64url");
-  const person = await createPasswordReset({
-    userId,
-    tokenHash: tokenHash(token),
-    createdBy: admin.id,
-    expiresAt: new Date(now.getTime() + RESET_LINK_MINUTES * 60_000),
-  });
+  const expiresAt = new Date(now.getTime() + RESET_LINK_MINUTES * 60_000);
+  const person = await createPasswordReset({ userId, tokenHash: tokenHash(token), createdBy: admin.id, expiresAt });
   if (!person) throw new RequestRefusal(404, "No such active user.", "userId");
   const link = new URL("/reset-password", getEnv().APP_BASE_URL);
   link.searchParams.set("token", token);
@@ -73,7 +70,7 @@ export async function sendPasswordReset(admin: SessionUser, userId: string, now 
     text: [
       `${person.name},`,
       "",
-      `${admin.name} sent you this link to set a new password. It works once, for ${RESET_LINK_MINUTES} minutes:`,
+      `${admin.name} sent you this link to set a new password. It works once, for ${RESET_LINK_MINUTES} minutes (until ${formatDateTime(expiresAt, shopTimeZone())}):`,
       "",
       link.toString(),
       "",

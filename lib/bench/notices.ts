@@ -3,19 +3,21 @@ import { getBenchView, type SignOffOutcome } from "@/db/bench";
 import { getJobTuner, listJobBlockIds } from "@/db/jobs";
 import { sendMailSafely } from "@/lib/server/mail";
 import { formatMeasurement, formatRange } from "@/lib/format/measurement";
-import { getEnv } from "@/lib/server/env";
+import { formatDateTime } from "@/lib/format/dates";
+import { getEnv, shopTimeZone } from "@/lib/server/env";
 
 // Messages that keep the tuner in step with the bench: a measurement outside plan, and the job done.
 
 /** The measured-vs-planned record of every block of the job's current revision, as plain text. */
 export async function benchSummary(jobId: string): Promise<string> {
   const lines: string[] = [];
+  const timeZone = shopTimeZone();
   for (const blockId of await listJobBlockIds(jobId)) {
     const view = await getBenchView({ id: "", role: "admin" }, blockId);
     if (!view) continue;
     lines.push(`${view.block.side.toUpperCase()} BLOCK (revision ${view.revision.number})`);
     for (const op of view.operations) {
-      lines.push(`  ${op.number}  ${op.title}: ${op.signOff ? `signed by ${op.signOff.by}` : "NOT SIGNED"}`);
+      lines.push(`  ${op.number}  ${op.title}: ${op.signOff ? `signed by ${op.signOff.by} at ${formatDateTime(op.signOff.at, timeZone)}` : "NOT SIGNED"}`);
       for (const planned of op.planned) {
         const measured = op.recorded.find((r) => r.key === planned.key);
         lines.push(

@@ -41,7 +41,7 @@ export async function sendReleaseNotice(actor: Viewer, jobId: string, revision: 
       const data = await getTravelerData(actor, { blockId: block.id, revision });
       attachments.push({
         filename: `${job.number}-${block.side}-rev${revision}.pdf`,
-        content: await renderTravelerPdf(data, { paper: "letter" }),
+        content: await renderTravelerPdf(data, { paper: "letter", timeZone: getEnv().SHOP_TIME_ZONE }),
         contentType: "application/pdf",
       });
       lines.push(`  ${block.side} block: ${benchUrl(block.id, revision)}`);

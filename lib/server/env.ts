@@ -1,5 +1,6 @@
 import "server-only";
 import { z } from "zod";
+import { canonicalTimeZone } from "@/lib/format/dates";
 
 // The one place that reads process.env. Validated on first use, not at import, so that
 // `next build` can load modules without a running database.
@@ -25,6 +26,16 @@ const envSchema = z.object({
   S3_BUCKET: z.string().default("blockwright"),
   S3_ACCESS_KEY_ID: z.string().default("S3RVER"),
   S3_SECRET_ACCESS_KEY: z.string().default("S3RVER"),
+  // The zone every page, mail and traveler prints dates in (an IANA name such as America/Chicago), stated once.
+  SHOP_TIME_ZONE: z
+    .string()
+    .default("UTC")
+    .transform((zone, ctx) => {
+      const canonical = canonicalTimeZone(zone);
+      if (canonical) return canonical;
+      ctx.addIssue({ code: "custom", message: "SHOP_TIME_ZONE must be an IANA time zone such as America/Chicago or UTC" });
+      return z.NEVER;
+    }),
 });
 
 export type Env = z.infer<typeof envSchema>;
@@ -41,4 +52,9 @@ export function getEnv(): Env {
     cached = parsed.data;
   }
   return cached;
+}
+
+/** The shop's time zone, for lib/format/dates.ts: server code reads it here and hands it to client components. */
+export function shopTimeZone(): string {
+  return getEnv().SHOP_TIME_ZONE;
 }

@@ -42,11 +42,6 @@ export function displacement(m3: number): string {
   return `${fixed(m3 * 1000, 2)} L · ${fixed(m3 / M3_PER_IN3, 0)} in³`;
 }
 
-/** A date as the shop writes it on paper, unambiguous in every country: 2025-06-01. */
-export function isoDate(iso: string): string {
-  return iso.slice(0, 10);
-}
-
 /** A planned measurement in its unit, with the other unit beside. */
 export function measured(quantity: "length" | "pressure", si: number): { main: string; other: string } {
   return quantity === "length" ? { main: inches(si), other: millimetres(si) } : { main: psi(si), other: kilopascals(si) };

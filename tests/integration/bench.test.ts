@@ -117,6 +117,8 @@ describe("signing operations off at the bench", () => {
     expect(JSON.stringify(done?.to)).toContain("tuner@blockwright.test");
     expect(done?.text).toContain("Measured against plan");
     expect(done?.text).toContain("PRIMARY BLOCK");
+    // Each sign-off with its time in the shop's zone (UTC, the default).
+    expect(done?.text).toMatch(/signed by .+ at \d{4}-\d{2}-\d{2} \d{2}:\d{2} UTC/);
   });
 
   it("holds the job in machining when a reading is outside plan, and tells the tuner", async () => {

@@ -107,6 +107,9 @@ describe("a reset link an admin sends", () => {
     expect(message.to && "text" in message.to ? message.to.text : "").toContain("tuner@blockwright.test");
     const link = /http\S+\/reset-password\?token=([A-Za-z0-9_-]{43})/.exec(message.text ?? "");
     expect(link).toBeTruthy();
+    // The link's end, in the shop's zone (UTC here, the default): the stored expiry to the minute.
+    const [stored] = await testDb.select().from(schema.passwordResetTokens);
+    expect(message.text).toContain(`(until ${stored!.expiresAt.toISOString().slice(0, 16).replace("T", " ")} UTC)`);
     return { token: link![1]!, tunerId: tuner!.id, tunerVersion: tuner!.sessionVersion };
   }
 

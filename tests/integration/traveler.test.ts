@@ -253,7 +253,7 @@ describe("a long traveler", () => {
       changes: null,
       benchUrl: "https://bench.blockwright.test/bench/7d0c8a52-93d1-4f4e-8f7a-3c2b1a0e9d11?revision=3",
     };
-    const file = await savePdf(await renderTravelerPdf(data, { paper: "a4" }));
+    const file = await savePdf(await renderTravelerPdf(data, { paper: "a4", timeZone: "UTC" }));
     const { pages } = await pdfInfo(file);
     expect(pages).toBeGreaterThan(2);
     let next = 0;
@@ -271,5 +271,41 @@ describe("a long traveler", () => {
       }
     }
     expect(next).toBe(16);
+  });
+});
+
+describe("dates on the traveler", () => {
+  it("prints the shop's calendar days, not UTC's", async () => {
+    const data: TravelerData = {
+      job: { number: "BW-0918", customer: "Odile Marchetti", carburetor: "Four-barrel", displacementM3: 0.0057, fuel: "Gasoline", peakBoostPa: 55158 },
+      block: { id: "7d0c8a52-93d1-4f4e-8f7a-3c2b1a0e9d12", side: "secondary", mainJetDiameterM: 0.002, mainJetCount: 2 },
+      revision: {
+        number: 1,
+        status: "current",
+        approvedAt: "2025-03-02T04:00:00.000Z",
+        approvedBy: "Mara Quillon",
+        releasedAt: "2025-03-03T03:00:00.000Z",
+        releasedBy: "Avery Lindqvist",
+        tuner: "Mara Quillon",
+      },
+      operations: [],
+      planNotes: [],
+      acknowledgedDangers: 0,
+      changes: null,
+      benchUrl: "https://bench.blockwright.test/bench/7d0c8a52-93d1-4f4e-8f7a-3c2b1a0e9d12?revision=1",
+    };
+    // America/Chicago keeps standard time, UTC-6, until the second Sunday of March (9 March in 2025; Energy
+    // Policy Act of 2005, 15 U.S.C. 260a): 04:00 UTC on 2 March is 22:00 on 1 March, 03:00 UTC on 3 March is
+    // 21:00 on 2 March, 05:30 UTC on 5 March is 23:30 on 4 March.
+    const printedAt = new Date("2025-03-05T05:30:00Z");
+    const chicago = await pdfText(await savePdf(await renderTravelerPdf(data, { timeZone: "America/Chicago", printedAt })), 1, "raw");
+    expect(chicago).toContain("Released 2025-03-02 by Avery Lindqvist");
+    expect(chicago).toContain("Approved 2025-03-01 by Mara Quillon");
+    expect(chicago).toContain("printed 2025-03-04");
+    // The same instants in UTC fall on the days their ISO strings name.
+    const utc = await pdfText(await savePdf(await renderTravelerPdf(data, { timeZone: "UTC", printedAt })), 1, "raw");
+    expect(utc).toContain("Released 2025-03-03 by Avery Lindqvist");
+    expect(utc).toContain("Approved 2025-03-02 by Mara Quillon");
+    expect(utc).toContain("printed 2025-03-05");
   });
 });

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { listCustomers } from "@/db/customers";
 import { listTuners } from "@/db/users";
 import { ALL_ROLES, OFFICE_ROLES, requireRole } from "@/lib/auth/session";
+import { shopTimeZone } from "@/lib/server/env";
 import { ButtonLink } from "@/components/ui/button";
 import { PageHeader, Sheet } from "@/components/ui/sheet";
 import { JobsTable } from "./jobs-table";
@@ -21,7 +22,7 @@ export default async function JobsPage() {
         actions={plans ? <ButtonLink href="/jobs/new">New job</ButtonLink> : null}
       />
       <Sheet>
-        <JobsTable customers={customers.map(({ id, name }) => ({ id, name }))} tuners={tuners} shopFloorOnly={!plans} />
+        <JobsTable customers={customers.map(({ id, name }) => ({ id, name }))} tuners={tuners} shopFloorOnly={!plans} timeZone={shopTimeZone()} />
       </Sheet>
     </>
   );

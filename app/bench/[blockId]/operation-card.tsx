@@ -22,7 +22,7 @@ import {
   type BenchLengthUnit,
   type BenchUnit,
 } from "./bench-units";
-import { LocalTime } from "./local-time";
+import { ShopTime } from "./shop-time";
 import { visibleParameters } from "./operation-terms";
 import { PhotoControl } from "./photo-control";
 import { signOffSchema, type SignOffInput } from "@/lib/bench/sign-off-schema";
@@ -47,6 +47,7 @@ export function OperationCard({
   photoIds,
   canSign,
   maxPhotoBytes,
+  timeZone,
 }: {
   blockId: string;
   operation: BenchOperation;
@@ -54,6 +55,8 @@ export function OperationCard({
   photoIds: string[];
   canSign: boolean;
   maxPhotoBytes: number;
+  /** The shop's time zone, from the server page: sign-off times print in it. */
+  timeZone: string;
 }) {
   // A second submit while or after the first one succeeded (a double tap) does not reach the server again.
   const [lastResult, dispatch, pending] = useActionState(
@@ -84,7 +87,7 @@ export function OperationCard({
         ) : null}
       </header>
       {signed ? (
-        <SignedSummary operation={operation} caution={caution} photoIds={photoIds} lastResult={lastResult} />
+        <SignedSummary operation={operation} caution={caution} photoIds={photoIds} lastResult={lastResult} timeZone={timeZone} />
       ) : (
         <div className="flex flex-col gap-4 px-4 py-4">
           <Work operation={operation} caution={caution} />
@@ -359,18 +362,20 @@ function SignedSummary({
   caution,
   photoIds,
   lastResult,
+  timeZone,
 }: {
   operation: BenchOperation;
   caution: SafetyCaution | null;
   photoIds: string[];
   lastResult: FormResult<SignOffResult> | undefined;
+  timeZone: string;
 }) {
   const signOff = operation.signOff!;
   const already = lastResult?.httpStatus === 200 && lastResult.data?.recorded === false;
   return (
     <div className="flex flex-col gap-3 px-4 py-3">
       <p className="text-base" data-testid="signed-by">
-        Signed by <strong>{signOff.by}</strong> at <LocalTime iso={signOff.at} withDay />
+        Signed by <strong>{signOff.by}</strong> at <ShopTime iso={signOff.at} timeZone={timeZone} withDay />
       </p>
       {already ? (
         <p role="status" className="rounded-[var(--radius-sheet)] border-2 border-ink bg-white px-3 py-2 font-semibold">

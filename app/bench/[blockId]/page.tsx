@@ -7,6 +7,7 @@ import { SafetyNote } from "@/components/ui/safety-note";
 import { ALL_ROLES, requireRole } from "@/lib/auth/session";
 import { benchPath } from "@/lib/bench/url";
 import { JOB_STATE_LABELS } from "@/db/job-states";
+import { shopTimeZone } from "@/lib/server/env";
 import { MAX_PHOTO_BYTES } from "@/lib/server/images";
 import { SAFETY_CAUTIONS, type HazardTopic } from "@/lib/safety/cautions";
 import { BenchSignOut } from "../bench-sign-out";
@@ -44,6 +45,7 @@ export default async function BenchPage({
   const canSign = !superseded && onTheBench;
   const signed = view.operations.filter((op) => op.signOff).length;
   const total = view.operations.length;
+  const timeZone = shopTimeZone();
 
   return (
     <>
@@ -112,6 +114,7 @@ export default async function BenchPage({
                 photoIds={view.photos.filter((p) => p.operationId === op.id).map((p) => p.id)}
                 canSign={canSign}
                 maxPhotoBytes={MAX_PHOTO_BYTES}
+                timeZone={timeZone}
               />
             </li>
           ))}

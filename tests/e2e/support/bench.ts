@@ -6,56 +6,23 @@ import { expect, type APIRequestContext, type Locator, type Page } from "@playwr
 import jsQR from "jsqr";
 import { PNG } from "pngjs";
 import sharp from "sharp";
+import { demoBlocksBody, demoJobBody } from "../../support/job-fixtures";
 
 // The journey from the office's API to the machinist's phone: a released job, its printed traveler's QR
 // code, and the bench page it opens.
 
-/** A job as the tuner enters it through the JSON API (quantities as { value, unit }). */
+/** The demo job as the tuner enters it through the JSON API, its engine given in litres and °C. */
 export function benchJobBody(customer: string) {
-  return {
+  return demoJobBody({
     newCustomerName: customer,
     carburetor: "Four-barrel, 750 cfm class, blow-through hat",
     displacement: { value: 5.7, unit: "L" },
-    fuelKind: "gasoline",
-    peakBoost: { value: 8, unit: "psi" },
-    targetLambdaAtmosphere: 0.88,
-    targetLambdaPeak: 0.86,
-    intercooled: true,
     ambientTemperature: { value: 25, unit: "°C" },
-    compressorEfficiencyPct: 70,
-    intercoolerEffectivenessPct: 70,
-    useAllDrills: true,
-  };
+  });
 }
 
-/** Both blocks: the primary with a vacuum valve and a boost valve, the secondary with one boost valve. */
-export function benchBlocksBody() {
-  return {
-    blocks: [
-      {
-        side: "primary",
-        mainJetDiameter: { value: 0.076, unit: "in" },
-        mainJetCount: 2,
-        channelLength: { value: 0.3, unit: "in" },
-        minWeb: { value: 0.03, unit: "in" },
-        passageDiameter: { value: 0.085, unit: "in" },
-        passageWall: { value: 0.2, unit: "in" },
-        passageDepth: { value: 0.4, unit: "in" },
-        stages: [
-          // The integration fixture's plan, which holds together on the whole-engine model (no danger to acknowledge).
-          { valveKind: "vacuum", vacuumRating: { value: 6.5, unit: "inHg" }, targetKind: "percentMainJet", targetTo: 12, maxHoles: 4 },
-          { valveKind: "boost", setpoint: { value: 3, unit: "psi" }, targetKind: "afr", mode: "full", targetFrom: 14.0, targetTo: 12.2, maxHoles: 4 },
-        ],
-      },
-      {
-        side: "secondary",
-        mainJetDiameter: { value: 0.086, unit: "in" },
-        mainJetCount: 2,
-        stages: [{ valveKind: "boost", setpoint: { value: 7, unit: "psi" }, targetKind: "lambda", targetFrom: 0.95, targetTo: 0.82, maxHoles: 4 }],
-      },
-    ],
-  };
-}
+/** Both blocks of the demo job: the plan holds together on the whole-engine model (no danger to acknowledge). */
+export const benchBlocksBody = demoBlocksBody;
 
 export interface JobDto {
   id: string;

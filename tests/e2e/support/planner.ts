@@ -1,23 +1,16 @@
 import { expect, type Locator, type Page } from "@playwright/test";
+import { demoJobBody } from "../../support/job-fixtures";
 
 // The job page and its blocks form, as the tuner and the machinist meet them.
 
-/** A job's inputs in the JSON API's terms: every quantity as { value, unit }. */
+/** The demo job in the JSON API's terms, with the planner journey's own carburetor, 9 psi and lambda 0.78 at peak. */
 export function newJobBody(customer: string) {
-  return {
+  return demoJobBody({
     newCustomerName: customer,
     carburetor: "Four-barrel, 750 cfm, boost-referenced secondaries",
-    displacement: { value: 350, unit: "in³" },
-    fuelKind: "gasoline",
     peakBoost: { value: 9, unit: "psi" },
-    targetLambdaAtmosphere: 0.88,
     targetLambdaPeak: 0.78,
-    intercooled: true,
-    ambientTemperature: { value: 77, unit: "°F" },
-    compressorEfficiencyPct: 70,
-    intercoolerEffectivenessPct: 70,
-    useAllDrills: true,
-  };
+  });
 }
 
 export class BlocksForm {

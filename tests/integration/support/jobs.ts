@@ -1,4 +1,4 @@
-// Job fixtures for the integration tests, in the API's own terms ({ value, unit } quantities).
+// Job fixtures for the integration tests: the demo job (tests/support/job-fixtures.ts) made through the data layer.
 import { createJob, saveJobBlocks } from "@/db/jobs";
 import type { Viewer } from "@/db/visibility";
 import { changeJobState } from "@/db/revisions";
@@ -8,55 +8,11 @@ import { createJobSchema, jobBlocksSchema } from "@/lib/jobs/schema";
 import type { JobFields } from "@/db/jobs";
 import { and, eq } from "drizzle-orm";
 import * as schema from "@/db/schema";
+import { demoBlocksBody, demoJobBody } from "../../support/job-fixtures";
 import { actAs, testDb, type Actor } from "./database";
 
-export function jobBody(overrides: Record<string, unknown> = {}) {
-  return {
-    newCustomerName: "Wren Halloway",
-    carburetor: "Four-barrel, vacuum secondaries, blow-through hat",
-    displacement: { value: 350, unit: "in³" },
-    fuelKind: "gasoline",
-    peakBoost: { value: 8, unit: "psi" },
-    targetLambdaAtmosphere: 0.88,
-    targetLambdaPeak: 0.86,
-    intercooled: true,
-    ambientTemperature: { value: 77, unit: "°F" },
-    compressorEfficiencyPct: 70,
-    intercoolerEffectivenessPct: 70,
-    useAllDrills: true,
-    ...overrides,
-  };
-}
-
-export function blocksBody() {
-  return {
-    blocks: [
-      {
-        side: "primary",
-        mainJetDiameter: { value: 0.076, unit: "in" },
-        mainJetCount: 2,
-        channelLength: { value: 0.3, unit: "in" },
-        minWeb: { value: 0.03, unit: "in" },
-        passageDiameter: { value: 0.085, unit: "in" },
-        passageWall: { value: 0.2, unit: "in" },
-        passageDepth: { value: 0.4, unit: "in" },
-        stages: [
-          // A plan that holds together on the whole-engine model: the 3 psi stage is read in full throttle and
-          // sized from the mixture the plan itself predicts there; the only lean zone left is the caution
-          // below 3 psi, before any boost valve opens.
-          { valveKind: "vacuum", vacuumRating: { value: 6.5, unit: "inHg" }, targetKind: "percentMainJet", targetTo: 12, maxHoles: 4 },
-          { valveKind: "boost", setpoint: { value: 3, unit: "psi" }, targetKind: "afr", mode: "full", targetFrom: 14.0, targetTo: 12.2, maxHoles: 4 },
-        ],
-      },
-      {
-        side: "secondary",
-        mainJetDiameter: { value: 0.086, unit: "in" },
-        mainJetCount: 2,
-        stages: [{ valveKind: "boost", setpoint: { value: 7, unit: "psi" }, targetKind: "lambda", targetFrom: 0.95, targetTo: 0.82, maxHoles: 4 }],
-      },
-    ],
-  };
-}
+// The demo job's request bodies, shared with the other tiers.
+export { demoBlocksBody as blocksBody, demoJobBody as jobBody } from "../../support/job-fixtures";
 
 async function viewer(actor: Exclude<Actor, "anonymous">): Promise<Viewer> {
   const id = await actAs(actor);
@@ -66,9 +22,9 @@ async function viewer(actor: Exclude<Actor, "anonymous">): Promise<Viewer> {
 /** A job with blocks, created by the tuner through the data layer, taken as far as `state`. */
 export async function makeJob(state: "draft" | "planned" | "released" = "draft", overrides: Record<string, unknown> = {}) {
   const tuner = await viewer("tuner");
-  const { customerId, newCustomerName, tunerId, ...fields } = createJobSchema.parse(jobBody(overrides));
+  const { customerId, newCustomerName, tunerId, ...fields } = createJobSchema.parse(demoJobBody(overrides));
   const job = await createJob(tuner, { fields: jobColumns(fields) as JobFields, customerId, newCustomerName, tunerId });
-  await saveJobBlocks(tuner, job.id, blockColumns(jobBlocksSchema.parse(blocksBody())));
+  await saveJobBlocks(tuner, job.id, blockColumns(jobBlocksSchema.parse(demoBlocksBody())));
   if (state !== "draft") await approveRevision(tuner, job.id);
   if (state === "released") await changeJobState(tuner, job.id, "released");
   return job;

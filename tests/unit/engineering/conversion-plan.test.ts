@@ -3,49 +3,23 @@ import { planConversion, type BlockInput, type EngineInput } from "@/lib/enginee
 import { extraFuelForMixtureChange } from "@/lib/engineering/stage-sizing";
 import { ALL_DRILLS, drillsFromLabels } from "@/lib/engineering/drills";
 import { GASOLINE } from "@/lib/engineering/fuels";
+import { PLANNER_ENGINE, PLANNER_PRIMARY, PLANNER_SECONDARY } from "../../support/job-fixtures";
 
 const IN = 0.0254;
 const IN2 = IN * IN;
 const PSI = 6894.757; // NIST SP 811: 1 psi = 6894.757 Pa
 const INHG = 3386.389; // NIST SP 811: 1 inHg (conventional) = 3386.389 Pa
 
-const engine: EngineInput = {
-  fuel: GASOLINE,
-  peakBoostPa: 10 * PSI,
-  ambientPressurePa: 101325, // ISO 2533 sea-level standard atmosphere
-  cruiseLambda: 1.0, // common practice, no published source
-  targetLambdaAtmosphere: 0.88,
-  targetLambdaPeak: 0.78,
-  ambientTemperatureK: 298.15,
-  compressorEfficiency: 0.7,
-  intercoolerEffectiveness: 0.7,
-};
+// The planner's reference job (tests/support/job-fixtures.ts): 10 psi peak, lambda 0.88 -> 0.78, ISO 2533 sea
+// level, 298.15 K, compressor 70 %, intercooler 70 %.
+const engine: EngineInput = { fuel: GASOLINE, ...PLANNER_ENGINE };
 
+// Its primary: two 0.080 in main jets, a 0.085 in vacuum passage, 0.040 in protrusion, no gap, 0.25 in boss wall, the 31.5 % vacuum stage and
+// an AFR 12.5 -> 11.5 stage at 3 psi. Its secondary: two 0.090 in jets, an 8 psi stage from lambda 0.85 to 0.78.
 // Two 0.080 in main jets: 2 x pi/4 x 0.080^2 = 0.0100531 in2. 31.5 % of that is 0.0031667 in2, the area of one
 // #52 hole (ASME B94.11M: #52 = 0.0635 in; pi/4 x 0.0635^2 = 0.0031669 in2).
-const primary: BlockInput = {
-  id: "block-p",
-  side: "primary",
-  mainJetDiameterM: 0.08 * IN,
-  mainJetCount: 2,
-  channelLengthM: 0.3 * IN,
-  minWebM: 0.03 * IN,
-  passage: { diameterM: 0.085 * IN, wallM: 0.2 * IN, depthM: 0.4 * IN },
-  grind: { valveProtrusionM: 0.04 * IN, measuredGapM: 0, bossWallM: 0.25 * IN },
-  stages: [
-    { id: "vac", valve: { kind: "vacuum", ratingPa: 6.5 * INHG }, target: { kind: "percentMainJet", percent: 31.5 }, maxHoles: 4 },
-    { id: "b3", valve: { kind: "boost", setpointPa: 3 * PSI }, target: { kind: "afr", from: 12.5, to: 11.5 }, maxHoles: 4 },
-  ],
-};
-
-const secondary: BlockInput = {
-  id: "block-s",
-  side: "secondary",
-  mainJetDiameterM: 0.09 * IN,
-  mainJetCount: 2,
-  tube: { runsM: [0.25 * IN, 0.5 * IN], bendDeg: 45, bendRadiusM: 0.375 * IN, swageM: 0.2 * IN },
-  stages: [{ id: "b8", valve: { kind: "boost", setpointPa: 8 * PSI }, target: { kind: "lambda", from: 0.85, to: 0.78 }, maxHoles: 4 }],
-};
+const primary: BlockInput = PLANNER_PRIMARY;
+const secondary: BlockInput = PLANNER_SECONDARY;
 
 describe("extra fuel from the tuner's terms", () => {
   it("takes an AFR change: 12.5 -> 11.5 needs 12.5 / 11.5 - 1 = 8.70 % more fuel", () => {

@@ -2,41 +2,19 @@ import { describe, expect, it } from "vitest";
 import { planConversion, type BlockInput, type EngineInput } from "@/lib/engineering/conversion-plan";
 import { ALL_DRILLS } from "@/lib/engineering/drills";
 import { GASOLINE } from "@/lib/engineering/fuels";
-import { acceptance, displacement, isoDate, measured } from "@/lib/traveler/format";
+import { formatDate } from "@/lib/format/dates";
+import { acceptance, displacement, measured } from "@/lib/traveler/format";
 import { travelerOperations } from "@/lib/traveler/operations";
+import { PLANNER_ENGINE, PLANNER_PRIMARY } from "../../support/job-fixtures";
 
 const IN = 0.0254; // exact, NIST SP 811
 const PSI = 6894.757; // NIST SP 811
-const INHG = 3386.389; // NIST SP 811
 
-const engine: EngineInput = {
-  fuel: GASOLINE,
-  peakBoostPa: 10 * PSI,
-  ambientPressurePa: 101325, // ISO 2533 sea-level standard atmosphere
-  cruiseLambda: 1.0, // common practice, no published source
-  targetLambdaAtmosphere: 0.88,
-  targetLambdaPeak: 0.78,
-  ambientTemperatureK: 298.15,
-  compressorEfficiency: 0.7,
-  intercoolerEffectiveness: 0.7,
-};
-
-// The primary block of the planner's own tests: 0.040 in protrusion, no gap, 0.25 in wall; a 0.085 in vacuum
-// passage; a vacuum stage of 31.5 % of two 0.080 in jets (one #52 hole) and a boost stage at 3 psi.
-const primary: BlockInput = {
-  id: "block-p",
-  side: "primary",
-  mainJetDiameterM: 0.08 * IN,
-  mainJetCount: 2,
-  channelLengthM: 0.3 * IN,
-  minWebM: 0.03 * IN,
-  passage: { diameterM: 0.085 * IN, wallM: 0.2 * IN, depthM: 0.4 * IN },
-  grind: { valveProtrusionM: 0.04 * IN, measuredGapM: 0, bossWallM: 0.25 * IN },
-  stages: [
-    { id: "vac", valve: { kind: "vacuum", ratingPa: 6.5 * INHG }, target: { kind: "percentMainJet", percent: 31.5 }, maxHoles: 4 },
-    { id: "b3", valve: { kind: "boost", setpointPa: 3 * PSI }, target: { kind: "afr", from: 12.5, to: 11.5 }, maxHoles: 4 },
-  ],
-};
+// The planner's reference job and its primary block (tests/support/job-fixtures.ts), as the planner's own tests
+// use them: 0.040 in protrusion, no gap, 0.25 in wall; a 0.085 in vacuum passage; a vacuum stage of 31.5 % of two
+// 0.080 in jets (one #52 hole) and a boost stage at 3 psi.
+const engine: EngineInput = { fuel: GASOLINE, ...PLANNER_ENGINE };
+const primary: BlockInput = PLANNER_PRIMARY;
 
 const plan = planConversion({ engine, blocks: [primary], drills: ALL_DRILLS }).blocks[0]!;
 const callout = (ops: ReturnType<typeof travelerOperations>, kind: string, label: string) =>
@@ -108,6 +86,6 @@ describe("traveler figures", () => {
     expect(displacement(5.7e-3)).toBe("5.70 L · 348 in³");
     expect(measured("pressure", 8 * PSI)).toEqual({ main: "8.0 psi", other: "55.2 kPa" });
     expect(measured("length", 0.089 * IN)).toEqual({ main: "0.0890 in", other: "2.261 mm" });
-    expect(isoDate("2025-06-02T08:00:00.000Z")).toBe("2025-06-02");
+    expect(formatDate("2025-06-02T08:00:00.000Z", "UTC")).toBe("2025-06-02");
   });
 });

@@ -3,13 +3,13 @@ import Link from "next/link";
 import type { TuningLogSummary } from "@/db/tuning-logs";
 import { ButtonLink } from "@/components/ui/button";
 import { Sheet, Tag } from "@/components/ui/sheet";
-import { dateTime } from "./_plan/format";
+import { formatDateTime } from "@/lib/format/dates";
 
 /**
  * The job's history from the dyno: per revision the engine ran on, the logs read and what each carried into
  * the next revision, oldest revision first.
  */
-export function LogsPanel({ jobId, logs, canRead }: { jobId: string; logs: TuningLogSummary[]; canRead: boolean }) {
+export function LogsPanel({ jobId, logs, canRead, timeZone }: { jobId: string; logs: TuningLogSummary[]; canRead: boolean; timeZone: string }) {
   const revisions = [...new Set(logs.map((l) => l.revisionNumber))].sort((a, b) => a - b);
   return (
     <Sheet
@@ -42,7 +42,7 @@ export function LogsPanel({ jobId, logs, canRead }: { jobId: string; logs: Tunin
                         {l.fileName}
                       </Link>{" "}
                       <span className="numeric text-xs text-graphite">
-                        {dateTime(l.uploadedAt.toISOString())} · {l.uploadedBy} · {l.usedRows} of {l.totalRows} rows used
+                        {formatDateTime(l.uploadedAt, timeZone)} · {l.uploadedBy} · {l.usedRows} of {l.totalRows} rows used
                       </span>
                       {l.acceptedAt && l.nextRevisionNumber ? (
                         <div className="mt-1">

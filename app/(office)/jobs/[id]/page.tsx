@@ -8,6 +8,7 @@ import { RequestRefusal } from "@/db/refusal";
 import { JOB_STATE_LABELS } from "@/db/job-states";
 import { parseIdParam } from "@/lib/http/route-params";
 import { shownPlanOf, type ShownPlan } from "@/lib/jobs/plan-shown";
+import { shopTimeZone } from "@/lib/server/env";
 import { ButtonLink } from "@/components/ui/button";
 import { PageHeader, Sheet, Tag } from "@/components/ui/sheet";
 import { BlockList } from "./_plan/block-list";
@@ -98,9 +99,9 @@ export default async function JobPage({ params }: Params) {
           <EngineSummary job={job} unit={unit} />
         </Sheet>
         <div className="flex flex-col gap-6">
-          <RevisionsPanel jobId={job.id} revisions={record.revisions} />
+          <RevisionsPanel jobId={job.id} revisions={record.revisions} timeZone={shopTimeZone()} />
           {office && job.currentRevision > 0 ? (
-            <LogsPanel jobId={job.id} logs={logs} canRead={SHOP_FLOOR_STATES.includes(job.state)} />
+            <LogsPanel jobId={job.id} logs={logs} canRead={SHOP_FLOOR_STATES.includes(job.state)} timeZone={shopTimeZone()} />
           ) : null}
           {job.currentRevision > 0 && record.blocks.length ? (
             <TravelersPanel revision={job.currentRevision} blocks={record.blocks.map((b) => ({ id: b.id, side: b.side }))} />

@@ -3,10 +3,10 @@ import Link from "next/link";
 import type { JobRecord } from "@/db/jobs";
 import { Sheet, Tag } from "@/components/ui/sheet";
 import { Table, Td, Th } from "@/components/ui/table";
-import { dateTime } from "./_plan/format";
+import { formatDateTime } from "@/lib/format/dates";
 
 /** Every approved revision, newest first; each opens its frozen snapshot. */
-export function RevisionsPanel({ jobId, revisions }: { jobId: string; revisions: JobRecord["revisions"] }) {
+export function RevisionsPanel({ jobId, revisions, timeZone }: { jobId: string; revisions: JobRecord["revisions"]; timeZone: string }) {
   return (
     <Sheet title="Revisions" className="self-start">
       {revisions.length === 0 ? (
@@ -17,7 +17,7 @@ export function RevisionsPanel({ jobId, revisions }: { jobId: string; revisions:
             <tr>
               <Th>Rev.</Th>
               <Th>Status</Th>
-              <Th>Approved (UTC)</Th>
+              <Th>Approved</Th>
               <Th>Released</Th>
             </tr>
           </thead>
@@ -33,9 +33,9 @@ export function RevisionsPanel({ jobId, revisions }: { jobId: string; revisions:
                 <Td>
                   {r.approvedBy}
                   <br />
-                  <span className="numeric text-xs text-graphite">{dateTime(r.approvedAt)}</span>
+                  <span className="numeric text-xs text-graphite">{formatDateTime(r.approvedAt, timeZone)}</span>
                 </Td>
-                <Td className="numeric text-xs whitespace-normal">{r.releasedAt ? dateTime(r.releasedAt) : "—"}</Td>
+                <Td className="numeric text-xs whitespace-normal">{r.releasedAt ? formatDateTime(r.releasedAt, timeZone) : "—"}</Td>
               </tr>
             ))}
           </tbody>

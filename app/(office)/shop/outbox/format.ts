@@ -1,3 +1,5 @@
+import { formatDateTime } from "@/lib/format/dates";
+
 /** A byte count as people read it: 812 B, 14.2 kB, 1.3 MB (decimal units). */
 export function formatBytes(bytes: number): string {
   if (bytes < 1000) return `${bytes} B`;
@@ -5,10 +7,9 @@ export function formatBytes(bytes: number): string {
   return `${(bytes / 1_000_000).toFixed(1)} MB`;
 }
 
-/** The message's date in the server's zone, to the minute: the outbox is a local, developer's view. */
-export function formatSent(iso: string | null): string {
-  if (!iso) return "—";
-  return new Date(iso).toISOString().slice(0, 16).replace("T", " ") + " UTC";
+/** The message's date in the shop's zone, to the minute; a message without one shows a dash. */
+export function formatSent(iso: string | null, timeZone: string): string {
+  return iso ? formatDateTime(iso, timeZone) : "—";
 }
 
 export function outboxHref(name: string): string {

@@ -3,6 +3,7 @@ import Link from "next/link";
 import { PageHeader, Sheet } from "@/components/ui/sheet";
 import { Table, Td, Th } from "@/components/ui/table";
 import { requireRole } from "@/lib/auth/session";
+import { shopTimeZone } from "@/lib/server/env";
 import { listOutbox, outboxDir } from "@/lib/server/outbox";
 import { formatBytes, formatSent, outboxHref } from "./format";
 
@@ -12,6 +13,7 @@ export const metadata: Metadata = { title: "Outbox" };
 export default async function OutboxPage() {
   await requireRole(["admin"], "/shop/outbox");
   const { folderExists, messages } = await listOutbox();
+  const timeZone = shopTimeZone();
   return (
     <>
       <PageHeader
@@ -50,7 +52,7 @@ export default async function OutboxPage() {
             <tbody>
               {messages.map((m) => (
                 <tr key={m.name} data-testid="outbox-row">
-                  <Td className="numeric whitespace-nowrap text-graphite">{formatSent(m.date)}</Td>
+                  <Td className="numeric whitespace-nowrap text-graphite">{formatSent(m.date, timeZone)}</Td>
                   <Td className="text-graphite">{m.to || "—"}</Td>
                   <Td>
                     <Link href={outboxHref(m.name)} className="font-medium text-accent underline-offset-2 hover:underline">

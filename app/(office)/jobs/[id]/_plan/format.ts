@@ -58,9 +58,3 @@ export function power(w: number): string {
 export function drillSize(m: number, unit: DisplayLengthUnit): string {
   return formatLength(lengthPair(m), unit);
 }
-
-/** "2026-03-14 09:30", in UTC: say so wherever a column of these is shown. */
-export function dateTime(iso: string | Date): string {
-  const date = typeof iso === "string" ? new Date(iso) : iso;
-  return date.toISOString().slice(0, 16).replace("T", " ");
-}

@@ -3,6 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { PageHeader, Sheet } from "@/components/ui/sheet";
 import { requireRole } from "@/lib/auth/session";
+import { shopTimeZone } from "@/lib/server/env";
 import { getOutboxMessage, OUTBOX_NAME } from "@/lib/server/outbox";
 import { attachmentHref, formatBytes, formatSent, outboxHref } from "../format";
 
@@ -23,7 +24,7 @@ export default async function OutboxMessagePage({ params }: { params: Promise<{ 
         <Sheet>
           <dl className="grid grid-cols-[8rem_1fr] gap-y-1 text-sm">
             <dt className="text-graphite">Sent</dt>
-            <dd className="numeric">{formatSent(message.date)}</dd>
+            <dd className="numeric">{formatSent(message.date, shopTimeZone())}</dd>
             <dt className="text-graphite">From</dt>
             <dd>{message.from || "—"}</dd>
             <dt className="text-graphite">To</dt>

@@ -10,18 +10,18 @@ export const metadata: Metadata = { title: "Mail queue" };
 
 const TONES = { queued: "muted", sending: "muted", retrying: "accent", sent: "plain", failed: "fault", cancelled: "muted" } as const;
 
-function stateNote(m: MailQueueEntry): string {
+function stateNote(m: MailQueueEntry, timeZone: string): string {
   switch (m.state) {
     case "queued":
       return "waiting for its first try";
     case "sending":
       return `try ${m.tries} of ${m.maxTries} under way`;
     case "retrying":
-      return `${m.tries} of ${m.maxTries} tries failed; next at ${formatSent(m.at)}`;
+      return `${m.tries} of ${m.maxTries} tries failed; next at ${formatSent(m.at, timeZone)}`;
     case "sent":
-      return `on try ${m.tries}, ${formatSent(m.at)}`;
+      return `on try ${m.tries}, ${formatSent(m.at, timeZone)}`;
     case "failed":
-      return `after ${m.tries} ${m.tries === 1 ? "try" : "tries"}, ${formatSent(m.at)}`;
+      return `after ${m.tries} ${m.tries === 1 ? "try" : "tries"}, ${formatSent(m.at, timeZone)}`;
     case "cancelled":
       return "not sent";
   }
@@ -59,13 +59,13 @@ export default async function MailQueuePage() {
             <tbody>
               {messages.map((m) => (
                 <tr key={m.id} data-testid="mail-queue-row">
-                  <Td className="numeric whitespace-nowrap text-graphite">{formatSent(m.queuedAt)}</Td>
+                  <Td className="numeric whitespace-nowrap text-graphite">{formatSent(m.queuedAt, env.SHOP_TIME_ZONE)}</Td>
                   <Td className="text-graphite">{m.to || "—"}</Td>
                   <Td className="font-medium">{m.subject}</Td>
                   <Td>
                     <div className="flex flex-col items-start gap-0.5">
                       <Tag tone={TONES[m.state]}>{m.state}</Tag>
-                      <span className="text-xs text-pencil">{stateNote(m)}</span>
+                      <span className="text-xs text-pencil">{stateNote(m, env.SHOP_TIME_ZONE)}</span>
                     </div>
                   </Td>
                   <Td className="text-graphite">{m.lastError ?? <span className="text-pencil">none</span>}</Td>

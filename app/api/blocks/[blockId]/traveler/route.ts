@@ -4,6 +4,7 @@ import { getTravelerData } from "@/lib/traveler/data";
 import { apiRoute } from "@/lib/http/api-route";
 import { ALL_ROLES } from "@/lib/auth/session";
 import { idParams } from "@/lib/http/route-params";
+import { shopTimeZone } from "@/lib/server/env";
 import { PAPER_SIZES } from "@/lib/traveler/types";
 
 const querySchema = z.object({
@@ -18,7 +19,7 @@ const querySchema = z.object({
 /** The printed traveler of one metering block: a PDF of the job's current revision, or of `?revision=N`. */
 export const GET = apiRoute({ roles: ALL_ROLES, params: idParams("blockId"), query: querySchema }, async ({ user, params, query }) => {
   const data = await getTravelerData(user, { blockId: params.blockId, revision: query.revision });
-  const pdf = await renderTravelerPdf(data, { paper: query.paper });
+  const pdf = await renderTravelerPdf(data, { paper: query.paper, timeZone: shopTimeZone() });
   const filename = `${data.job.number}-${data.block.side}-rev${data.revision.number}.pdf`;
   return new Response(new Uint8Array(pdf), {
     headers: {

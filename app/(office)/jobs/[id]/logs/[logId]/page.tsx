@@ -12,7 +12,9 @@ import { LineChart } from "@/components/charts/line-chart";
 import { ButtonLink } from "@/components/ui/button";
 import { PageHeader, Sheet } from "@/components/ui/sheet";
 import { Table, Td, Th } from "@/components/ui/table";
-import { area, dateTime } from "../../_plan/format";
+import { area } from "../../_plan/format";
+import { formatDateTime } from "@/lib/format/dates";
+import { shopTimeZone } from "@/lib/server/env";
 import { AcceptCorrections } from "../_components/accept-corrections";
 
 export const metadata: Metadata = { title: "Air-fuel log" };
@@ -96,7 +98,7 @@ export default async function LogPage({ params }: { params: Promise<{ id: string
             <dd className="font-semibold">revision {log.revisionNumber}</dd>
             <dt className="text-graphite">Read</dt>
             <dd>
-              {dateTime(log.uploadedAt.toISOString())}
+              {formatDateTime(log.uploadedAt, shopTimeZone())}
             </dd>
             <dt className="text-graphite">Rows</dt>
             <dd className="numeric" data-testid="log-counts">

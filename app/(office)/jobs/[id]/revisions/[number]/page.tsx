@@ -6,9 +6,10 @@ import { getRevisionSnapshot } from "@/db/revisions";
 import { ALL_ROLES, requireRole } from "@/lib/auth/session";
 import { parseIdParam } from "@/lib/http/route-params";
 import { snapshotPlan } from "@/lib/jobs/plan";
+import { formatDateTime } from "@/lib/format/dates";
+import { shopTimeZone } from "@/lib/server/env";
 import { PageHeader, Sheet, Tag } from "@/components/ui/sheet";
 import { EngineSummary, type EngineFacts } from "../../_plan/engine-summary";
-import { dateTime } from "../../_plan/format";
 import { PlanView } from "../../_plan/plan-view";
 
 export const metadata: Metadata = { title: "Revision" };
@@ -73,10 +74,10 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
             <dd className="font-semibold">{String(snapshot.job.carburetor ?? "")}</dd>
             <dt className="text-graphite">Approved by</dt>
             <dd className="font-semibold">{listed.approvedBy}</dd>
-            <dt className="text-graphite">Approved at (UTC)</dt>
-            <dd className="numeric">{dateTime(listed.approvedAt)}</dd>
-            <dt className="text-graphite">Released at (UTC)</dt>
-            <dd className="numeric">{listed.releasedAt ? dateTime(listed.releasedAt) : "not released"}</dd>
+            <dt className="text-graphite">Approved at</dt>
+            <dd className="numeric">{formatDateTime(listed.approvedAt, shopTimeZone())}</dd>
+            <dt className="text-graphite">Released at</dt>
+            <dd className="numeric">{listed.releasedAt ? formatDateTime(listed.releasedAt, shopTimeZone()) : "not released"}</dd>
           </dl>
         </Sheet>
       </div>
