@@ -2,14 +2,13 @@ import "server-only";
 import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import type { PlannedMeasurement } from "@/lib/engineering/conversion-plan";
 import type { JobState } from "@/db/job-states";
-import { maySeeJob } from "./visibility";
 import { RequestRefusal } from "@/db/refusal";
 import { recordAudit } from "./audit";
 import { getDb } from "./client";
 import { lockJob } from "./jobs";
-import type { Viewer } from "./visibility";
+import { maySeeJob, type Viewer } from "./visibility";
 import { currentRevisionComplete } from "./revisions";
-import { attachments, customers, jobs, measurements, meteringBlocks, operations, planRevisions, signOffs, users } from "./schema";
+import { attachments, customers, jobs, measurementAmendments, measurements, meteringBlocks, operations, planRevisions, signOffs, users } from "./schema";
 
 export interface BenchOperation {
   id: string;
@@ -192,4 +191,109 @@ export async function signOffOperation(
     await recordAudit(tx, viewer.id, "operation.sign", input.operationId, { job: job.number, failed: failed.map((f) => f.key), state });
     return { recorded: true, operationTitle: op.op.title, jobId: job.id, jobState: state, failed, allSigned: progress.allSigned, verified };
   });
+}
+
+export interface AmendOutcome {
+  jobId: string;
+  operationTitle: string;
+  jobState: JobState;
+  /** Readings that changed: before and after, and whether each is within plan now. */
+  amended: { key: string; label: string; previousSi: number; valueSi: number; passed: boolean }[];
+  /** Measurements of this operation still outside plan. */
+  failed: { key: string; label: string }[];
+  verified: boolean;
+}
+
+/**
+ * Corrects the readings of a signed operation (a typo at the bench) with a reason. The signer or an admin may;
+ * the earlier readings are kept in measurement_amendments and the audit trail, and the job's state is derived
+ * again (a corrected failure can complete the job). A verified job is reopened by an admin first; a delivered
+ * one is closed.
+ */
+export async function amendSignOff(
+  viewer: Viewer,
+  input: { operationId: string; measurements: Record<string, number>; reason: string; quantities?: Record<string, "length" | "pressure"> },
+): Promise<AmendOutcome> {
+  return getDb().transaction(async (tx) => {
+    const [op] = await tx
+      .select({ op: operations, revisionStatus: planRevisions.status, revisionNumber: planRevisions.number, jobId: planRevisions.jobId })
+      .from(operations)
+      .innerJoin(planRevisions, eq(planRevisions.id, operations.revisionId))
+      .where(eq(operations.id, input.operationId));
+    if (!op) throw new RequestRefusal(404, "No such operation.", "operationId");
+    const job = await lockJob(tx, op.jobId);
+    if (!maySeeJob(viewer, job.state)) throw new RequestRefusal(404, "No such operation.", "operationId");
+    const [signed] = await tx.select({ userId: signOffs.userId }).from(signOffs).where(eq(signOffs.operationId, input.operationId));
+    if (!signed) throw new RequestRefusal(409, "The operation is not signed yet: sign it off with its readings.", "operationId");
+    if (viewer.role !== "admin" && signed.userId !== viewer.id) {
+      throw new RequestRefusal(403, "Only the person who signed this operation, or an admin, may correct its readings.", "operationId");
+    }
+    if (op.revisionStatus !== "current" || op.revisionNumber !== job.currentRevision) {
+      throw new RequestRefusal(409, `Revision ${op.revisionNumber} is superseded: its record stays as it was.`, "operationId");
+    }
+    if (job.state === "verified") throw new RequestRefusal(409, "The job is verified: an admin reopens it (back to machining) before a reading is corrected.", "operationId");
+    if (job.state !== "machining") throw new RequestRefusal(409, `The job is ${job.state}: its bench record is closed.`, "operationId");
+
+    const planned = op.op.measurements as PlannedMeasurement[];
+    const current = await tx.select().from(measurements).where(eq(measurements.operationId, input.operationId));
+    const amended: AmendOutcome["amended"] = [];
+    for (const [key, value] of Object.entries(input.measurements)) {
+      const plan = planned.find((m) => m.key === key);
+      if (!plan) throw new RequestRefusal(400, "This operation has no such reading.", `readings.${key}`);
+      if (!Number.isFinite(value)) throw new RequestRefusal(400, `Record ${plan.label.toLowerCase()} as a number.`, `readings.${key}`);
+      const measuredAs = input.quantities?.[key];
+      if (measuredAs && measuredAs !== plan.quantity) {
+        throw new RequestRefusal(400, `${plan.label} is a ${plan.quantity}: choose a ${plan.quantity === "length" ? "length unit (in or mm)" : "pressure unit (psi, kPa or bar)"}.`, `readings.${key}`);
+      }
+      const before = current.find((m) => m.key === key);
+      if (!before) throw new RequestRefusal(409, `${plan.label} was not recorded at sign-off.`, `readings.${key}`);
+      if (before.valueSi === value) continue;
+      const passed = value >= plan.minSi - 1e-12 && value <= plan.maxSi + 1e-12;
+      await tx.insert(measurementAmendments).values({
+        operationId: input.operationId,
+        key,
+        previousValueSi: before.valueSi,
+        previousPassed: before.passed,
+        valueSi: value,
+        passed,
+        reason: input.reason,
+        amendedById: viewer.id,
+      });
+      await tx.update(measurements).set({ valueSi: value, passed, recordedById: viewer.id, recordedAt: new Date() }).where(eq(measurements.id, before.id));
+      amended.push({ key, label: plan.label, previousSi: before.valueSi, valueSi: value, passed });
+    }
+    if (amended.length === 0) throw new RequestRefusal(400, "Every reading is as recorded: change one to correct it.", "readings");
+    const after = await tx.select({ key: measurements.key, passed: measurements.passed }).from(measurements).where(eq(measurements.operationId, input.operationId));
+    const failed = after.filter((m) => !m.passed).map((m) => ({ key: m.key, label: planned.find((p) => p.key === m.key)?.label ?? m.key }));
+    const progress = await currentRevisionComplete(tx, job.id, job.currentRevision);
+    const state: JobState = progress.complete ? "verified" : "machining";
+    if (state !== job.state) await tx.update(jobs).set({ state, updatedAt: new Date() }).where(eq(jobs.id, job.id));
+    await recordAudit(tx, viewer.id, "operation.amend", input.operationId, {
+      job: job.number,
+      reason: input.reason,
+      readings: amended.map((a) => ({ key: a.key, from: a.previousSi, to: a.valueSi, passed: a.passed })),
+      state,
+    });
+    return { jobId: job.id, operationTitle: op.op.title, jobState: state, amended, failed, verified: state === "verified" };
+  });
+}
+
+/** Every correction of the operations' readings, oldest first, with who made it. */
+export async function listAmendments(operationIds: string[]) {
+  if (operationIds.length === 0) return [];
+  return getDb()
+    .select({
+      operationId: measurementAmendments.operationId,
+      key: measurementAmendments.key,
+      previousValueSi: measurementAmendments.previousValueSi,
+      valueSi: measurementAmendments.valueSi,
+      passed: measurementAmendments.passed,
+      reason: measurementAmendments.reason,
+      by: users.name,
+      at: measurementAmendments.amendedAt,
+    })
+    .from(measurementAmendments)
+    .innerJoin(users, eq(users.id, measurementAmendments.amendedById))
+    .where(inArray(measurementAmendments.operationId, operationIds))
+    .orderBy(asc(measurementAmendments.amendedAt));
 }

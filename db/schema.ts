@@ -373,3 +373,24 @@ export const logMappings = pgTable("log_mappings", {
   mapping: jsonb("mapping").notNull(),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
 });
+
+/**
+ * A signed reading corrected afterwards (a typo at the bench): the reading as it was, what replaced it, why
+ * and by whom. The measurement row holds the reading in force; these rows keep every earlier one.
+ */
+export const measurementAmendments = pgTable("measurement_amendments", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  operationId: uuid("operation_id")
+    .notNull()
+    .references(() => operations.id, { onDelete: "cascade" }),
+  key: text("key").notNull(),
+  previousValueSi: doublePrecision("previous_value_si").notNull(),
+  previousPassed: boolean("previous_passed").notNull(),
+  valueSi: doublePrecision("value_si").notNull(),
+  passed: boolean("passed").notNull(),
+  reason: text("reason").notNull(),
+  amendedById: uuid("amended_by_id")
+    .notNull()
+    .references(() => users.id),
+  amendedAt: timestamp("amended_at", { withTimezone: true }).notNull().defaultNow(),
+});
