@@ -1,9 +1,12 @@
 // Unit conversion at the edges. Everything inside lib/engineering is SI: m, m², Pa, kg/s, m³/s, K, kg/m³.
 // Conversions go through a private mathjs instance that knows only units, plus the two pressure units
-// mathjs lacks (inch of mercury and inch of water, conventional values of NIST SP 811, appendix B.8).
+// mathjs lacks (inch of mercury and inch of water; their factors, like every other, live in unit-factors.ts).
 
 import { create, createUnitDependencies, unitDependencies } from "mathjs";
 import type { PressureReference } from "./types";
+import { PA_PER_INH2O, PA_PER_INHG, STANDARD_ATMOSPHERE_PA } from "./unit-factors";
+
+export * from "./unit-factors";
 
 // mathjs types its dependency maps as possibly undefined under noUncheckedIndexedAccess; they are always there.
 function dependency<T>(map: T | undefined, name: string): T {
@@ -15,16 +18,6 @@ const math = create({
   unitDependencies: dependency(unitDependencies, "unitDependencies"),
   createUnitDependencies: dependency(createUnitDependencies, "createUnitDependencies"),
 });
-
-// NIST SP 811 (2008), B.8: inch of mercury, conventional = 3.386 389 E+03 Pa
-// (13 595.1 kg/m³ x 9.806 65 m/s² x 0.0254 m).
-export const PA_PER_INHG = 3386.389;
-// NIST SP 811 (2008), B.8: inch of water, conventional = 2.490 889 E+02 Pa
-// (1000 kg/m³ x 9.806 65 m/s² x 0.0254 m). The same table gives 2.490 82 E+02 Pa for water at 39.2 °F;
-// the two differ by 0.003 %, far below what a manometer reads.
-export const PA_PER_INH2O = 249.0889;
-// ISO 2533 / NIST SP 811: standard atmosphere = 101 325 Pa.
-export const STANDARD_ATMOSPHERE_PA = 101325;
 
 math.createUnit({
   inHg: { definition: `${PA_PER_INHG} Pa` },
