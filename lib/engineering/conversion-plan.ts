@@ -21,7 +21,8 @@ import type { RestrictionDrillLimits } from "./restriction-limits";
 import { planPickupTube, COMMON_PICKUP_TUBE_OD_M, type PickupTubePlan } from "./pickup-tube";
 import { jetAreaOf, mainJetsBySide, sizeStages, stageMode, type StageInput, type StagePlan } from "./stage-sizing";
 import { stagingBalance, type CarburetorSide, type StagingBalance, type StagingModel, type StagingSweep } from "./staging";
-import { passagePlug, UNIFIED_THREADS, type MissingTooling, type PassagePlug, type PassagePlugResult } from "./threads";
+import { passagePlug, type MissingTooling, type PassagePlug, type PassagePlugResult } from "./passage-plug";
+import { UNIFIED_THREADS } from "./threads";
 import type { Drill, FuelProperties } from "./types";
 import { PA_PER_INHG } from "./units";
 

@@ -8,11 +8,9 @@ import {
   threadEngagementPct,
   tapDrill,
   clearanceDrill,
-  passagePlug,
-  setScrewFor,
-  type PassagePlugResult,
   type Thread,
 } from "@/lib/engineering/threads";
+import { passagePlug, setScrewFor, type PassagePlugResult } from "@/lib/engineering/passage-plug";
 import { INCH_DRILLS, METRIC_DRILLS, drillsFromLabels } from "@/lib/engineering/drills";
 
 const IN = 0.0254; // NIST SP 811: 1 in = 0.0254 m exactly

@@ -1,6 +1,7 @@
 import "server-only";
 import { drillDto, lengthPair, tidy, type DrillDto, type LengthPair } from "@/lib/format/quantity-pairs";
-import { ALL_THREADS, clearanceDrill, METRIC_THREADS, parseThread, passagePlug, tapDrill, UNIFIED_THREADS, type Thread } from "@/lib/engineering/threads";
+import { passagePlug } from "@/lib/engineering/passage-plug";
+import { ALL_THREADS, clearanceDrill, METRIC_THREADS, parseThread, tapDrill, UNIFIED_THREADS, type Thread } from "@/lib/engineering/threads";
 import type { Drill } from "@/lib/engineering/types";
 import { toSI } from "@/lib/engineering/units";
 import { RequestRefusal } from "@/db/refusal";
