@@ -2,8 +2,7 @@
 // metric (0.30-13.00 mm). Diameters are held in metres.
 
 import type { Drill, DrillSystem } from "./types";
-
-const M_PER_IN = 0.0254;
+import { M_PER_IN, M_PER_MM } from "./unit-factors";
 
 export const DRILL_SYSTEMS: readonly DrillSystem[] = ["number", "letter", "fraction", "metric"];
 
@@ -118,7 +117,7 @@ export function findDrill(label: string): Drill | undefined {
     if (value <= 0) return undefined;
     const found = BY_LABEL.get(metricDrill(value).label);
     // "2.503 mm" is not a stocked size even though it rounds to one.
-    return found !== undefined && Math.abs(found.diameterM * 1000 - value) < 1e-9 ? found : undefined;
+    return found !== undefined && Math.abs(found.diameterM / M_PER_MM - value) < 1e-9 ? found : undefined;
   }
 
   const inch = /^(\d*\.\d+|\d+) ?(?:in|inch|")$/.exec(s);

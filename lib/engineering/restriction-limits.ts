@@ -5,8 +5,7 @@
 
 import { findDrill } from "./drills";
 import type { Drill, DrillSystem } from "./types";
-
-const M_PER_IN = 0.0254;
+import { M_PER_IN } from "./unit-factors";
 
 /** Which drill series one plan draws from: the inch series (number, letter, fraction), metric, or both. */
 export type PlanDrillSystem = "inch" | "metric" | "mixed";

@@ -17,6 +17,8 @@ export const M3_PER_L = 0.001;
 export const KG_PER_LB = 0.45359237;
 /** standard acceleration of gravity = 9.806 65 m/s² exactly. */
 export const STANDARD_GRAVITY_M_PER_S2 = 9.80665;
+/** horsepower (550 ft·lbf/s), from the exact foot and pound-force: 745.699 9 W. */
+export const W_PER_HP = 550 * M_PER_FT * KG_PER_LB * STANDARD_GRAVITY_M_PER_S2;
 
 /**
  * pound-force per square inch: the exact pound-force (0.453 592 37 kg x 9.806 65 m/s²) over the square inch,
