@@ -141,15 +141,6 @@ export function drillLabelProblem(label: string): string | undefined {
   return `"${label.trim()}" is not a standard drill size: write ${DRILL_LABEL_FORMS}`;
 }
 
-/** The drills named by the labels, in the order given; a label that names none throws an error naming it. */
-export function drillsFromLabels(labels: readonly string[], field = "drills"): Drill[] {
-  return labels.map((label, i) => {
-    const drill = findDrill(label);
-    if (drill === undefined) throw new RangeError(`${field}.${i}: ${drillLabelProblem(label)}`);
-    return drill;
-  });
-}
-
 export type DrillDirection = "nearest" | "atLeast" | "atMost";
 
 export interface NearestDrillOptions {
@@ -186,9 +177,4 @@ export function nearestDrill(diameterM: number, options: NearestDrillOptions = {
     }
   }
   return best;
-}
-
-/** Diameter of a drill in inches (for display and for comparing with inch tables). */
-export function drillInches(drill: Drill): number {
-  return drill.diameterM / M_PER_IN;
 }
