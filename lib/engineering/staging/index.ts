@@ -3,7 +3,6 @@
 
 export {
   jetBankArea,
-  neededAreaAt,
   predictedMixtureAt,
   sideCounts,
   suppliedAreaAt,

@@ -283,10 +283,3 @@ export function predictedMixtureAt(model: StagingModel, gaugePa: number, mode: T
   const base = mode === "part" ? cal.basePart : cal.baseFull;
   return cal.referenceAfr * Math.sqrt(air.densityKgM3 / cal.referenceDensity) * (base / suppliedAreaM2);
 }
-
-/** Area the target mixture needs at a gauge pressure, m². */
-export function neededAreaAt(model: StagingModel, gaugePa: number, mode: ThrottleMode): number {
-  validateModel(model);
-  const cal = calibrationOf(model);
-  return (mode === "part" ? cal.basePart : cal.baseFull) * demandFactor(model, cal, gaugePa);
-}
