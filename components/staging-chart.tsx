@@ -2,6 +2,7 @@
 
 import { CartesianGrid, ComposedChart, Line, ReferenceArea, ReferenceDot, ReferenceLine, Tooltip, XAxis, YAxis } from "recharts";
 import type { ThrottleMode } from "@/lib/engineering/staging";
+import { PA_PER_INHG, PA_PER_PSI } from "@/lib/engineering/unit-factors";
 import { areaUnitLabel, areaValue, fixed, type DisplayLengthUnit } from "@/lib/format/display";
 import type { StagingChartDto, StagingValveDto } from "@/lib/jobs/staging-chart";
 
@@ -14,8 +15,8 @@ const RICH = "#9fc9b8";
 const RULE = "#d5d0c3";
 const GRAPHITE = "#4b5058";
 
-/** 1 psi in inHg: 6894.757 Pa / 3386.389 Pa (NIST SP 811 factors). */
-const INHG_PER_PSI = 6894.757 / 3386.389;
+/** 1 psi in inHg. */
+const INHG_PER_PSI = PA_PER_PSI / PA_PER_INHG;
 
 const MODE_TITLE: Record<ThrottleMode, string> = { part: "Part throttle (primary side)", full: "Full throttle (both sides)" };
 

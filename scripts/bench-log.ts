@@ -7,6 +7,7 @@ import { Readable } from "node:stream";
 import { readAirFuelLog } from "../lib/engineering/air-fuel-log";
 import { binReadings } from "../lib/engineering/log-bins";
 import { steadyReadings } from "../lib/engineering/steady-readings";
+import { STANDARD_ATMOSPHERE_PA } from "../lib/engineering/unit-factors";
 import { readLog } from "../lib/tuning/log-csv";
 
 const ROWS = 200_000;
@@ -36,7 +37,7 @@ export async function runLogSection(): Promise<void> {
     mixture: { column: "Lambda", kind: "lambda" },
     throttle: { column: "TPS %" },
   });
-  const { readings } = readAirFuelLog(log.rows, { ambientPa: 101_325, fuelStoichAfr: 14.7 });
+  const { readings } = readAirFuelLog(log.rows, { ambientPa: STANDARD_ATMOSPHERE_PA, fuelStoichAfr: 14.7 });
   const steady = steadyReadings(readings);
   const bins = binReadings(steady.readings);
   const ms = performance.now() - start;

@@ -17,6 +17,7 @@ import { DEFAULT_RESTRICTION_DRILL_LIMITS, type RestrictionDrillLimits } from ".
 import { proposeStaging, type StagingModel } from "../lib/engineering/staging";
 import { planConversion } from "../lib/engineering/conversion-plan";
 import { GASOLINE } from "../lib/engineering/fuels";
+import { M_PER_IN, PA_PER_INHG, PA_PER_PSI, STANDARD_ATMOSPHERE_PA } from "../lib/engineering/unit-factors";
 import { travelerOperations } from "../lib/traveler/operations";
 import type { TravelerData } from "../lib/traveler/types";
 import { renderTravelerPdf } from "../lib/traveler/pdf/render-traveler";
@@ -32,16 +33,13 @@ interface BenchCase {
 }
 
 // Inputs in shop units, converted with NIST SP 811 factors.
-const M_PER_IN = 0.0254;
-const PA_PER_PSI = 6894.757;
-const PA_PER_INHG = 3386.389;
 const jetArea = (inches: number) => (Math.PI / 4) * (inches * M_PER_IN) ** 2;
 
 // Demo calibration: a boosted four-barrel with a vacuum valve on the primary.
 const STAGING_MODEL: StagingModel = {
   mainJets: { primary: { count: 2, areaM2: jetArea(0.076) }, secondary: { count: 2, areaM2: jetArea(0.086) } },
   valves: [{ id: "vacuum", side: "primary", kind: "vacuum", ratingPa: 6.5 * PA_PER_INHG, restrictionAreaM2: 2 * jetArea(0.04) }],
-  ambient: { pressurePa: 101_325, temperatureK: 298.15 },
+  ambient: { pressurePa: STANDARD_ATMOSPHERE_PA, temperatureK: 298.15 },
   target: { atmosphereAfr: 12.8, peakBoostAfr: 11.5, peakBoostGaugePa: 12 * PA_PER_PSI },
   charge: { kind: "compressor", efficiency: 0.7, intercoolerEffectiveness: 0.7 },
 };
@@ -52,7 +50,7 @@ const TRAVELER_PLAN = planConversion({
   engine: {
     fuel: GASOLINE,
     peakBoostPa: 10 * PA_PER_PSI,
-    ambientPressurePa: 101325, // ISO 2533 sea-level standard atmosphere
+    ambientPressurePa: STANDARD_ATMOSPHERE_PA,
     cruiseLambda: 1.0, // common practice, no published source
     targetLambdaAtmosphere: 0.88,
     targetLambdaPeak: 0.78,

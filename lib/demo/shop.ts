@@ -3,6 +3,7 @@ import "server-only";
 // verified). Uses the real data layer so the demo follows the same rules as the app.
 import { eq } from "drizzle-orm";
 import { FRACTION_DRILLS, LETTER_DRILLS, NUMBER_DRILLS } from "@/lib/engineering/drills";
+import { M3_PER_L as L, M_PER_IN as IN, PA_PER_INHG as INHG, PA_PER_PSI as PSI, W_PER_HP } from "@/lib/engineering/unit-factors";
 import { getDb } from "@/db/client";
 import { insertCustomer } from "@/db/customers";
 import { createJob, saveJobBlocks, type BlockFields, type JobFields, type StageFields } from "@/db/jobs";
@@ -10,11 +11,6 @@ import type { Viewer } from "@/db/visibility";
 import { changeJobState } from "@/db/revisions";
 import { approveRevision } from "@/lib/jobs/approve";
 import { customers, measurements, operations, planRevisions, signOffs, stockedDrills, users } from "@/db/schema";
-
-const IN = 0.0254;
-const PSI = 6894.757;
-const INHG = 3386.389;
-const L = 0.001;
 
 const DEMO_CUSTOMERS = [
   { name: "Castor Vell", email: "castor.vell@example.test", phone: "555-0141", notes: "Street car, pump gas, weekend drag strip." },
@@ -74,7 +70,7 @@ export const DEMO_JOBS: { customer: number; fields: JobFields; blocks: DemoBlock
       carburetor: "Four-barrel, vacuum secondaries, 750 cfm class, blow-through hat",
       displacementM3: 5.7 * L,
       fuelKind: "gasoline",
-      targetPowerW: 450 * 745.7,
+      targetPowerW: 450 * W_PER_HP,
       peakBoostPa: 8 * PSI,
       notes: "Single turbo, air-to-air intercooler.",
     }),

@@ -12,6 +12,7 @@
 import { GASOLINE } from "./fuels";
 import { requirePositive } from "./checks";
 import type { PressureReference } from "./types";
+import { PA_PER_KPA } from "./unit-factors";
 import { toGauge } from "./units";
 
 /** A mixture as the wideband showed it. */
@@ -92,7 +93,7 @@ export function readAirFuelLog(
     const absolutePa = reference === "absolute" ? pa : ambientPa + pa;
     if (reference !== "absolute" && reference !== "gauge") problems.push(`manifold.reference: must be "absolute" or "gauge"`);
     else if (outside(absolutePa, ABSOLUTE_MANIFOLD_RANGE_PA)) {
-      problems.push(`manifold.pa: ${text(absolutePa / 1000, 1)} kPa absolute is outside 10 to 400 kPa`);
+      problems.push(`manifold.pa: ${text(absolutePa / PA_PER_KPA, 1)} kPa absolute is outside 10 to 400 kPa`);
     }
     const lambda = lambdaOfShown(row.mixture, stoich);
     if (outside(lambda, LAMBDA_RANGE)) {

@@ -23,9 +23,3 @@ export function standardAtmospherePressurePa(elevationM: number): number {
   requireInRange("site elevation", elevationM, SITE_ELEVATION_RANGE_M.min, SITE_ELEVATION_RANGE_M.max);
   return STANDARD_ATMOSPHERE_PA * Math.pow(1 - (LAPSE_RATE_K_PER_M * elevationM) / T0_K, EXPONENT);
 }
-
-/** Standard-atmosphere temperature at a geopotential elevation, K (ISO 2533, troposphere). */
-export function standardAtmosphereTemperatureK(elevationM: number): number {
-  requireInRange("site elevation", elevationM, SITE_ELEVATION_RANGE_M.min, SITE_ELEVATION_RANGE_M.max);
-  return T0_K - LAPSE_RATE_K_PER_M * elevationM;
-}

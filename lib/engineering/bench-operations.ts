@@ -4,10 +4,7 @@
 
 import type { BlockInput, BlockPlan, PlannedOperation } from "./conversion-plan";
 import { holeAcceptBand } from "./hole-accept-band";
-import { PA_PER_INHG } from "./units";
-
-const M_PER_IN = 0.0254;
-const PA_PER_PSI = 6894.757;
+import { M2_PER_IN2, M_PER_IN, PA_PER_INHG, PA_PER_PSI } from "./unit-factors";
 
 // Bench tolerances (common practice, no published source): a drilled hole is accepted in a band narrower than
 // half the gap to the neighbouring drill sizes (hole-accept-band.ts), so the bench never passes the wrong
@@ -89,7 +86,7 @@ export function blockOperations(block: BlockInput, plan: Omit<BlockPlan, "operat
       kind: "restriction",
       title: `Channel restriction for the ${valve}`,
       instructions: `Drill ${c.count} hole${c.count > 1 ? "s" : ""} with ${c.drill.label} (${inches(c.drill.diameterM)}) through the power-valve channel. Check every hole with pin gauges and record the size.`,
-      parameters: { count: c.count, drill: c.drill.label, drillSize: inches(c.drill.diameterM), area: `${(c.holesAreaM2 / (M_PER_IN * M_PER_IN)).toFixed(5)} in²` },
+      parameters: { count: c.count, drill: c.drill.label, drillSize: inches(c.drill.diameterM), area: `${(c.holesAreaM2 / M2_PER_IN2).toFixed(5)} in²` },
       measurements: Array.from({ length: c.count }, (_, i) => ({
         key: `hole-${i + 1}`,
         label: `Hole ${i + 1} by pin gauge`,

@@ -21,15 +21,13 @@ import type { RestrictionDrillLimits } from "./restriction-limits";
 import { planPickupTube, COMMON_PICKUP_TUBE_OD_M, type PickupTubePlan } from "./pickup-tube";
 import { jetAreaOf, mainJetsBySide, sizeStages, stageMode, type StageInput, type StagePlan } from "./stage-sizing";
 import { stagingBalance, type CarburetorSide, type StagingBalance, type StagingModel, type StagingSweep } from "./staging";
-import { passagePlug, UNIFIED_THREADS, type MissingTooling, type PassagePlug, type PassagePlugResult } from "./threads";
+import { passagePlug, type MissingTooling, type PassagePlug, type PassagePlugResult } from "./passage-plug";
+import { UNIFIED_THREADS } from "./threads";
 import type { Drill, FuelProperties } from "./types";
-import { PA_PER_INHG } from "./units";
+import { M_PER_IN, PA_PER_INHG, PA_PER_PSI } from "./unit-factors";
 
 export type { EnrichmentTarget, StageInput, StagePlan } from "./stage-sizing";
 export type { PlanWarning } from "./plan-warnings";
-
-const M_PER_IN = 0.0254;
-const PA_PER_PSI = 6894.757;
 
 /** Default running clearance between a boost valve and the ground boss (common practice, no published source). */
 export const DEFAULT_RUNNING_CLEARANCE_M = 0.03 * M_PER_IN;

@@ -2,8 +2,7 @@
 // metric (0.30-13.00 mm). Diameters are held in metres.
 
 import type { Drill, DrillSystem } from "./types";
-
-const M_PER_IN = 0.0254;
+import { M_PER_IN, M_PER_MM } from "./unit-factors";
 
 export const DRILL_SYSTEMS: readonly DrillSystem[] = ["number", "letter", "fraction", "metric"];
 
@@ -118,7 +117,7 @@ export function findDrill(label: string): Drill | undefined {
     if (value <= 0) return undefined;
     const found = BY_LABEL.get(metricDrill(value).label);
     // "2.503 mm" is not a stocked size even though it rounds to one.
-    return found !== undefined && Math.abs(found.diameterM * 1000 - value) < 1e-9 ? found : undefined;
+    return found !== undefined && Math.abs(found.diameterM / M_PER_MM - value) < 1e-9 ? found : undefined;
   }
 
   const inch = /^(\d*\.\d+|\d+) ?(?:in|inch|")$/.exec(s);
@@ -140,15 +139,6 @@ export function drillLabelProblem(label: string): string | undefined {
     return `"${label.trim()}" does not say which drill series it is: write ${DRILL_LABEL_FORMS}`;
   }
   return `"${label.trim()}" is not a standard drill size: write ${DRILL_LABEL_FORMS}`;
-}
-
-/** The drills named by the labels, in the order given; a label that names none throws an error naming it. */
-export function drillsFromLabels(labels: readonly string[], field = "drills"): Drill[] {
-  return labels.map((label, i) => {
-    const drill = findDrill(label);
-    if (drill === undefined) throw new RangeError(`${field}.${i}: ${drillLabelProblem(label)}`);
-    return drill;
-  });
 }
 
 export type DrillDirection = "nearest" | "atLeast" | "atMost";
@@ -187,9 +177,4 @@ export function nearestDrill(diameterM: number, options: NearestDrillOptions = {
     }
   }
   return best;
-}
-
-/** Diameter of a drill in inches (for display and for comparing with inch tables). */
-export function drillInches(drill: Drill): number {
-  return drill.diameterM / M_PER_IN;
 }

@@ -54,34 +54,3 @@ export function intercoolerOutletTemperature(input: {
   const eps = requireInRange("effectiveness", input.effectiveness, 0, 1);
   return tIn - eps * (tIn - tCool);
 }
-
-/**
- * Air mass flow of a four-stroke engine (one intake stroke every two revolutions):
- *   m_air = rho_charge * displacement * (rpm / 60) / 2 * VE
- */
-export function airMassFlow(input: {
-  chargeDensityKgM3: number;
-  displacementM3: number;
-  rpm: number;
-  volumetricEfficiency: number;
-}): number {
-  return (
-    requirePositive("chargeDensityKgM3", input.chargeDensityKgM3) *
-    requirePositive("displacementM3", input.displacementM3) *
-    (requirePositive("rpm", input.rpm) / 60 / 2) *
-    requirePositive("volumetricEfficiency", input.volumetricEfficiency)
-  );
-}
-
-/** Fuel mass flow for an air mass flow at a target AFR: m_fuel = m_air / AFR. */
-export function fuelMassFlowFromAir(input: { airMassFlowKgS: number; afr: number }): number {
-  return requirePositive("airMassFlowKgS", input.airMassFlowKgS) / requirePositive("afr", input.afr);
-}
-
-/**
- * Fuel mass flow from brake power and brake specific fuel consumption: m_fuel = P * BSFC.
- * BSFC in SI is kg/J (g/(kW h) / 3.6e9).
- */
-export function fuelMassFlowFromPower(input: { brakePowerW: number; bsfcKgPerJ: number }): number {
-  return requirePositive("brakePowerW", input.brakePowerW) * requirePositive("bsfcKgPerJ", input.bsfcKgPerJ);
-}

@@ -83,21 +83,3 @@ export function fuelProperties(spec: FuelSpec): FuelProperties {
     }
   }
 }
-
-function requirePositive(value: number, field: string): void {
-  if (!Number.isFinite(value) || value <= 0) throw new RangeError(`${field}: must be above zero, got ${value}`);
-}
-
-/** Lambda of a mixture: its air-fuel ratio over the fuel's stoichiometric ratio. */
-export function afrToLambda(afr: number, stoichAfr: number): number {
-  requirePositive(afr, "afr");
-  requirePositive(stoichAfr, "stoichAfr");
-  return afr / stoichAfr;
-}
-
-/** Air-fuel ratio of a mixture of the given lambda. */
-export function lambdaToAfr(lambda: number, stoichAfr: number): number {
-  requirePositive(lambda, "lambda");
-  requirePositive(stoichAfr, "stoichAfr");
-  return lambda * stoichAfr;
-}

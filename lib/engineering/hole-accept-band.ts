@@ -5,8 +5,7 @@
 
 import { FRACTION_DRILLS, LETTER_DRILLS, METRIC_DRILLS, NUMBER_DRILLS } from "./drills";
 import type { Drill, DrillSystem } from "./types";
-
-const M_PER_IN = 0.0254;
+import { M_PER_IN, M_PER_MM } from "./unit-factors";
 
 /** Widest allowance on either side: 0.001 in (common practice, no published source). */
 export const MAX_ACCEPT_ALLOWANCE_M = 0.001 * M_PER_IN;
@@ -16,7 +15,7 @@ const PIN_STEP_M: Readonly<Record<DrillSystem, number>> = {
   number: 0.0001 * M_PER_IN,
   letter: 0.0001 * M_PER_IN,
   fraction: 0.0001 * M_PER_IN,
-  metric: 0.000001,
+  metric: 0.001 * M_PER_MM,
 };
 
 const SERIES: Readonly<Record<DrillSystem, readonly Drill[]>> = {

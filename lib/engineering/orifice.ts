@@ -9,21 +9,6 @@
 
 import { requireNonNegative, requirePositive } from "./checks";
 
-/**
- * Discharge coefficient of a sharp-edged thin-plate orifice at high Reynolds number: about 0.61, the
- * contraction of the vena contracta. Any fluid mechanics text has it (White, Fluid Mechanics; Munson,
- * Fundamentals of Fluid Mechanics).
- */
-export const CD_SHARP_EDGED_ORIFICE = 0.61;
-
-/**
- * Discharge coefficient of a short drilled hole (length about 1 to 3 diameters, square entry): about 0.8,
- * because the jet reattaches to the wall of the hole before it leaves. Value from memory of the short-tube
- * ("external mouthpiece") figures of around 0.8 in fluid mechanics and hydraulics texts (e.g. White, Fluid
- * Mechanics); it falls at low Reynolds number, so treat it as a planning default, not a calibration.
- */
-export const CD_SHORT_DRILLED_HOLE = 0.8;
-
 const QUARTER_PI = Math.PI / 4;
 
 /** Area of a round hole of diameter d (m) in m². */
@@ -61,36 +46,6 @@ export function areaFromMassFlow(input: OrificeConditions & { massFlowKgS: numbe
   return input.massFlowKgS / (input.cd * Math.sqrt(2 * input.densityKgM3 * input.deltaPPa));
 }
 
-/** Mass flow (kg/s) through an orifice of the given area: m = Cd * A * sqrt(2 rho dP). */
-export function massFlowFromArea(input: OrificeConditions & { areaM2: number }): number {
-  validateConditions(input);
-  requireNonNegative("areaM2", input.areaM2);
-  return input.cd * input.areaM2 * Math.sqrt(2 * input.densityKgM3 * input.deltaPPa);
-}
-
-/** Orifices side by side: their areas add. */
-export function parallelArea(areasM2: readonly number[]): number {
-  let sum = 0;
-  for (let i = 0; i < areasM2.length; i++) sum += requireNonNegative(`areasM2[${i}]`, areasM2[i] ?? Number.NaN);
-  return sum;
-}
-
-/**
- * Orifices one after the other, same flow, equal Cd: 1/A_eq² = Σ 1/A_i². The result is never larger than
- * the smallest member; a closed member (area 0) closes the line. An empty list is no restriction at all
- * and has no finite area, so it is refused.
- */
-export function seriesArea(areasM2: readonly number[]): number {
-  if (areasM2.length === 0) throw new RangeError("seriesArea needs at least one area");
-  let inverseSquares = 0;
-  for (let i = 0; i < areasM2.length; i++) {
-    const a = requireNonNegative(`areasM2[${i}]`, areasM2[i] ?? Number.NaN);
-    if (a === 0) return 0;
-    inverseSquares += 1 / (a * a);
-  }
-  return 1 / Math.sqrt(inverseSquares);
-}
-
 /**
  * Series area of two orifices without allocating: a*b/sqrt(a²+b²). Used in hot loops.
  * Both areas must already be validated as non-negative.
@@ -98,29 +53,4 @@ export function seriesArea(areasM2: readonly number[]): number {
 export function seriesPairArea(aM2: number, bM2: number): number {
   if (aM2 === 0 || bM2 === 0) return 0;
   return (aM2 * bM2) / Math.sqrt(aM2 * aM2 + bM2 * bM2);
-}
-
-export interface EffectiveRestriction {
-  /** Area the holes and the valve window pass together, m². */
-  effectiveAreaM2: number;
-  /**
-   * True when the valve's flow window, not the holes, sets the flow: the holes' area is at least the
-   * window's. At that point the series area has reached window/√2 (70.7 % of the window), and no amount of
-   * further hole area can raise it by more than another 41 % (it only tends to the window itself).
-   */
-  valveLimited: boolean;
-}
-
-/**
- * Channel restriction holes in series with the power valve's own flow window. Without a window the holes
- * alone set the area. See EffectiveRestriction.valveLimited for the rule.
- */
-export function effectiveRestrictionArea(input: {
-  holesAreaM2: number;
-  valveWindowAreaM2?: number | undefined;
-}): EffectiveRestriction {
-  const holes = requireNonNegative("holesAreaM2", input.holesAreaM2);
-  if (input.valveWindowAreaM2 === undefined) return { effectiveAreaM2: holes, valveLimited: false };
-  const window = requirePositive("valveWindowAreaM2", input.valveWindowAreaM2);
-  return { effectiveAreaM2: seriesPairArea(holes, window), valveLimited: holes >= window };
 }

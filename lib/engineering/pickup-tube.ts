@@ -11,9 +11,10 @@
 // the bowl needs to come off.
 
 import { requireFinite, requireNonNegative, requirePositive } from "./checks";
+import { M_PER_IN } from "./unit-factors";
 
 /** Soft copper tube of 5/16 in outside diameter (common practice, no published source), in metres. */
-export const COMMON_PICKUP_TUBE_OD_M = (5 / 16) * 0.0254;
+export const COMMON_PICKUP_TUBE_OD_M = (5 / 16) * M_PER_IN;
 
 export type TubeSegment =
   | { kind: "straight"; lengthM: number }

@@ -15,6 +15,7 @@
 
 import { chargeModelFromPeak } from "./charge-temperature";
 import { DANGEROUS_LEAN_FRACTION, type PlanWarning } from "./plan-warnings";
+import { PA_PER_INHG, PA_PER_PSI } from "./unit-factors";
 import type { StagePlan } from "./stage-sizing";
 import {
   predictedMixtureAt,
@@ -196,8 +197,8 @@ export function mixtureSweep(model: StagingModel, fromGaugePa: number, points: n
   return { sweep, fullThrottleFromGaugePa };
 }
 
-const psiText = (pa: number) => `${(pa / 6894.757).toFixed(1)} psi`;
-const inHgText = (pa: number) => `${(-pa / 3386.389).toFixed(1)} inHg`;
+const psiText = (pa: number) => `${(pa / PA_PER_PSI).toFixed(1)} psi`;
+const inHgText = (pa: number) => `${(-pa / PA_PER_INHG).toFixed(1)} inHg`;
 const pressureText = (pa: number) => (pa < 0 ? `${inHgText(pa)} vacuum` : `${psiText(pa)} boost`);
 
 /** Warnings for the sweep's zones: lean under boost graded by how lean, lean under vacuum, rich anywhere. */

@@ -5,8 +5,7 @@
 
 import { findDrill } from "./drills";
 import type { Drill, DrillSystem } from "./types";
-
-const M_PER_IN = 0.0254;
+import { M_PER_IN } from "./unit-factors";
 
 /** Which drill series one plan draws from: the inch series (number, letter, fraction), metric, or both. */
 export type PlanDrillSystem = "inch" | "metric" | "mixed";
@@ -46,12 +45,6 @@ export function inDrillSystem(series: DrillSystem, system: PlanDrillSystem): boo
   return system === "metric" ? series === "metric" : series !== "metric";
 }
 
-/** Only the drills of one plan's system, in the order given. */
-export function drillsOfSystem(drills: readonly Drill[], system: PlanDrillSystem): Drill[] {
-  requirePlanDrillSystem(system);
-  return drills.filter((d) => inDrillSystem(d.system, system));
-}
-
 /** Whether a drill may be used for a restriction under the limits (system and diameter). */
 export function isRestrictionDrill(drill: Drill, limits: RestrictionDrillLimits): boolean {
   return (
@@ -59,12 +52,6 @@ export function isRestrictionDrill(drill: Drill, limits: RestrictionDrillLimits)
     drill.diameterM >= limits.smallestDrillM - SAME_DIAMETER_M &&
     drill.diameterM <= limits.largestDrillM + SAME_DIAMETER_M
   );
-}
-
-/** The drills a plan may use for restrictions, in the order given. */
-export function restrictionDrills(drills: readonly Drill[], limits: RestrictionDrillLimits): Drill[] {
-  checkRestrictionDrillLimits(limits);
-  return drills.filter((d) => isRestrictionDrill(d, limits));
 }
 
 /** The shop's settings as stored (labels, null meaning "the default") and the job's drill system. */

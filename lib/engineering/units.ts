@@ -1,9 +1,12 @@
 // Unit conversion at the edges. Everything inside lib/engineering is SI: m, m², Pa, kg/s, m³/s, K, kg/m³.
 // Conversions go through a private mathjs instance that knows only units, plus the two pressure units
-// mathjs lacks (inch of mercury and inch of water, conventional values of NIST SP 811, appendix B.8).
+// mathjs lacks (inch of mercury and inch of water; their factors, like every other, live in unit-factors.ts).
 
 import { create, createUnitDependencies, unitDependencies } from "mathjs";
 import type { PressureReference } from "./types";
+import { PA_PER_INH2O, PA_PER_INHG, STANDARD_ATMOSPHERE_PA } from "./unit-factors";
+
+export * from "./unit-factors";
 
 // mathjs types its dependency maps as possibly undefined under noUncheckedIndexedAccess; they are always there.
 function dependency<T>(map: T | undefined, name: string): T {
@@ -15,16 +18,6 @@ const math = create({
   unitDependencies: dependency(unitDependencies, "unitDependencies"),
   createUnitDependencies: dependency(createUnitDependencies, "createUnitDependencies"),
 });
-
-// NIST SP 811 (2008), B.8: inch of mercury, conventional = 3.386 389 E+03 Pa
-// (13 595.1 kg/m³ x 9.806 65 m/s² x 0.0254 m).
-export const PA_PER_INHG = 3386.389;
-// NIST SP 811 (2008), B.8: inch of water, conventional = 2.490 889 E+02 Pa
-// (1000 kg/m³ x 9.806 65 m/s² x 0.0254 m). The same table gives 2.490 82 E+02 Pa for water at 39.2 °F;
-// the two differ by 0.003 %, far below what a manometer reads.
-export const PA_PER_INH2O = 249.0889;
-// ISO 2533 / NIST SP 811: standard atmosphere = 101 325 Pa.
-export const STANDARD_ATMOSPHERE_PA = 101325;
 
 math.createUnit({
   inHg: { definition: `${PA_PER_INHG} Pa` },
@@ -82,19 +75,6 @@ export const UNITS_BY_KIND: { readonly [K in QuantityKind]: readonly UnitsByKind
   power: POWER_UNITS,
 };
 
-/** The SI unit every value of a kind is held in inside lib/engineering. */
-export const SI_UNIT: { readonly [K in QuantityKind]: UnitsByKind[K] } = {
-  length: "m",
-  area: "m²",
-  pressure: "Pa",
-  massFlow: "kg/s",
-  volumeFlow: "m³/s",
-  temperature: "K",
-  density: "kg/m³",
-  displacement: "m³",
-  power: "W",
-};
-
 // Our unit names -> mathjs unit expressions.
 const MATHJS_UNIT: { readonly [K in QuantityKind]: Readonly<Record<UnitsByKind[K], string>> } = {
   length: { in: "in", mm: "mm", m: "m" },
@@ -147,16 +127,6 @@ export function fromSI<K extends QuantityKind>(kind: K, valueSI: number, unit: U
   return math.unit(valueSI, MATHJS_SI[kind]).toNumber(mathjsUnit(kind, unit));
 }
 
-/** Converts between two units of one kind. */
-export function convert<K extends QuantityKind>(
-  kind: K,
-  value: number,
-  from: UnitsByKind[K],
-  to: UnitsByKind[K],
-): number {
-  return fromSI(kind, toSI(kind, value, from), to);
-}
-
 // ---------------------------------------------------------------------------------------------------------
 // Pressures with a reference. A gauge pressure and an absolute pressure are different types, so a function
 // that needs one cannot be handed the other without an explicit conversion.
@@ -195,24 +165,9 @@ export function pressure(value: number, unit: PressureUnit, reference: PressureR
   return reference === "gauge" ? gaugePressure(pa) : absolutePressure(pa);
 }
 
-/** The value of a pressure in the given unit, keeping its reference (the caller knows which one it holds). */
-export function pressureIn(p: Pressure, unit: PressureUnit): number {
-  return fromSI("pressure", p.pa, unit);
-}
-
 function requireAmbient(ambientPa: number): void {
   requireFinite(ambientPa, "ambientPa");
   if (ambientPa <= 0) throw new RangeError(`ambientPa: must be above zero, got ${ambientPa} Pa`);
-}
-
-/** Absolute pressure from a gauge reading; the ambient defaults to the standard atmosphere. */
-export function absoluteFromGauge(p: GaugePressure, ambientPa: number = STANDARD_ATMOSPHERE_PA): AbsolutePressure {
-  requireAmbient(ambientPa);
-  const pa = ambientPa + p.pa;
-  if (pa < 0) {
-    throw new RangeError(`pa: ${p.pa} Pa gauge is below a perfect vacuum at an ambient of ${ambientPa} Pa`);
-  }
-  return { reference: "absolute", pa };
 }
 
 /** Gauge pressure from an absolute one; the ambient defaults to the standard atmosphere. */
@@ -221,29 +176,7 @@ export function gaugeFromAbsolute(p: AbsolutePressure, ambientPa: number = STAND
   return { reference: "gauge", pa: p.pa - ambientPa };
 }
 
-/** Either kind of pressure as absolute. */
-export function toAbsolute(p: Pressure, ambientPa: number = STANDARD_ATMOSPHERE_PA): AbsolutePressure {
-  return p.reference === "absolute" ? p : absoluteFromGauge(p, ambientPa);
-}
-
 /** Either kind of pressure as gauge. */
 export function toGauge(p: Pressure, ambientPa: number = STANDARD_ATMOSPHERE_PA): GaugePressure {
   return p.reference === "gauge" ? p : gaugeFromAbsolute(p, ambientPa);
-}
-
-/**
- * Manifold vacuum read in inHg (a gauge reading below the atmosphere, written as a positive number) as an
- * absolute pressure: 0 inHg of vacuum is the ambient pressure, more vacuum is less pressure.
- */
-export function absoluteFromVacuumInHg(vacuumInHg: number, ambientPa: number = STANDARD_ATMOSPHERE_PA): AbsolutePressure {
-  requireFinite(vacuumInHg, "vacuumInHg");
-  if (vacuumInHg < 0) {
-    throw new RangeError(`vacuumInHg: a vacuum reading is written as a positive number, got ${vacuumInHg}`);
-  }
-  return absoluteFromGauge(gaugePressure(-vacuumInHg * PA_PER_INHG), ambientPa);
-}
-
-/** Manifold vacuum in inHg (positive below the ambient) of an absolute pressure; negative under boost. */
-export function vacuumInHgFromAbsolute(p: AbsolutePressure, ambientPa: number = STANDARD_ATMOSPHERE_PA): number {
-  return -gaugeFromAbsolute(p, ambientPa).pa / PA_PER_INHG;
 }

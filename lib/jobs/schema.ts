@@ -2,12 +2,10 @@ import { z } from "zod";
 import { quantity, optionalQuantity } from "@/lib/forms/quantity-input";
 import { JOB_STATES } from "@/db/job-states";
 import { SITE_ELEVATION_RANGE_M } from "@/lib/engineering/atmosphere";
+import { M_PER_FT, M_PER_IN as IN, PA_PER_INHG, PA_PER_PSI as PSI } from "@/lib/engineering/unit-factors";
 
 // Schemas of the job forms, shared by the Conform forms, the server actions and the JSON API. Quantities come
 // as { value, unit } and leave as SI.
-
-const IN = 0.0254;
-const PSI = 6894.757;
 
 const lambda = (label: string) =>
   z.coerce
@@ -17,8 +15,6 @@ const lambda = (label: string) =>
 
 const percent = (label: string, min = 1, max = 100) =>
   z.coerce.number({ error: `Enter ${label}.` }).min(min, { error: `${label} must be ${min}-${max} %.` }).max(max, { error: `${label} must be ${min}-${max} %.` });
-
-const M_PER_FT = 0.3048; // NIST SP 811: 1 ft = 0.3048 m exactly
 
 /** A site elevation as { value, unit } in m or ft, parsed to metres within the range a shop plans for. */
 const siteElevation = z
@@ -117,7 +113,7 @@ export type UpdateJobInput = z.output<typeof updateJobSchema>;
 const stageSchema = z
   .object({
     valveKind: z.enum(["vacuum", "boost"], { error: "Choose the valve: vacuum or boost-referenced." }),
-    vacuumRating: optionalQuantity("pressure", "vacuum rating", { max: 30 * 3386.389 }, ["inHg", "kPa"]),
+    vacuumRating: optionalQuantity("pressure", "vacuum rating", { max: 30 * PA_PER_INHG }, ["inHg", "kPa"]),
     setpoint: optionalQuantity("pressure", "opening pressure", { max: 60 * PSI }, ["psi", "kPa", "bar"]),
     targetKind: z.enum(["afr", "lambda", "percentMainJet", "area"], { error: "Choose how the enrichment is given." }),
     mode: z.enum(["part", "full"], { error: "mode must be part (primary side alone) or full (both sides)." }).optional(),

@@ -1,19 +1,15 @@
 // Figures as the traveler prints them: inch first with millimetres beside, psi with kPa; fixed decimals per
-// unit so that a column of figures lines up. Conversion factors are exact (NIST SP 811: 1 in = 25.4 mm,
-// 1 in³ = 16.387 064 cm³) or to NIST's seven figures (1 psi = 6894.757 Pa).
+// unit so that a column of figures lines up. The factors come from lib/engineering/unit-factors.
 
+import { M2_PER_IN2, M2_PER_MM2, M3_PER_IN3, M3_PER_L, M_PER_IN, M_PER_MM, PA_PER_KPA, PA_PER_PSI } from "@/lib/engineering/unit-factors";
 import { fixed } from "@/lib/format/display";
-
-const M_PER_IN = 0.0254;
-const PA_PER_PSI = 6894.757;
-const M3_PER_IN3 = M_PER_IN ** 3;
 
 export function inches(m: number, decimals = 4): string {
   return `${fixed(m / M_PER_IN, decimals)} in`;
 }
 
 export function millimetres(m: number, decimals = 3): string {
-  return `${fixed(m * 1000, decimals)} mm`;
+  return `${fixed(m / M_PER_MM, decimals)} mm`;
 }
 
 /** "0.0890 in · 2.261 mm". */
@@ -22,11 +18,11 @@ export function lengthBoth(m: number): string {
 }
 
 export function squareInches(m2: number): string {
-  return `${fixed(m2 / (M_PER_IN * M_PER_IN), 5)} in²`;
+  return `${fixed(m2 / M2_PER_IN2, 5)} in²`;
 }
 
 export function squareMillimetres(m2: number): string {
-  return `${fixed(m2 * 1e6, 3)} mm²`;
+  return `${fixed(m2 / M2_PER_MM2, 3)} mm²`;
 }
 
 export function psi(pa: number, decimals = 1): string {
@@ -34,12 +30,12 @@ export function psi(pa: number, decimals = 1): string {
 }
 
 export function kilopascals(pa: number, decimals = 1): string {
-  return `${fixed(pa / 1000, decimals)} kPa`;
+  return `${fixed(pa / PA_PER_KPA, decimals)} kPa`;
 }
 
 /** "5.70 L · 348 in³". */
 export function displacement(m3: number): string {
-  return `${fixed(m3 * 1000, 2)} L · ${fixed(m3 / M3_PER_IN3, 0)} in³`;
+  return `${fixed(m3 / M3_PER_L, 2)} L · ${fixed(m3 / M3_PER_IN3, 0)} in³`;
 }
 
 /** A planned measurement in its unit, with the other unit beside. */

@@ -3,19 +3,18 @@
 // again with lib/engineering/units (mathjs) and decides; what the phone shows is a preview of that.
 
 import { BENCH_LENGTH_UNITS, BENCH_PRESSURE_UNITS } from "@/lib/bench/sign-off-schema";
+import { M2_PER_IN2, M2_PER_MM2, M_PER_IN, M_PER_MM, PA_PER_BAR, PA_PER_KPA, PA_PER_PSI } from "@/lib/engineering/unit-factors";
 
 export type BenchLengthUnit = (typeof BENCH_LENGTH_UNITS)[number];
 export type BenchPressureUnit = (typeof BENCH_PRESSURE_UNITS)[number];
 export type BenchUnit = BenchLengthUnit | BenchPressureUnit;
 
-// NIST SP 811 (2008), B.8: inch = 0.0254 m exactly; pound-force per square inch = 6.894 757 E+03 Pa,
-// here to the digits the exact pound-force (4.448 221 615 260 5 N) over the square inch gives.
 const SI_PER_UNIT: Record<BenchUnit, number> = {
-  in: 0.0254,
-  mm: 0.001,
-  psi: 6894.757293168,
-  kPa: 1000,
-  bar: 100000,
+  in: M_PER_IN,
+  mm: M_PER_MM,
+  psi: PA_PER_PSI,
+  kPa: PA_PER_KPA,
+  bar: PA_PER_BAR,
 };
 
 /** Decimals each unit is read to at the bench: pin gauges to ten-thousandths, gauges to hundredths. */
@@ -67,9 +66,6 @@ export function withinPlan(valueSi: number, minSi: number, maxSi: number): boole
 export function holesArea(diametersSi: readonly number[]): number {
   return diametersSi.reduce((sum, d) => sum + (Math.PI / 4) * d * d, 0);
 }
-
-const M2_PER_IN2 = 0.0254 * 0.0254;
-const M2_PER_MM2 = 0.001 * 0.001;
 
 /** An area in the length unit's square: in² to five decimals, mm² to three. */
 export function formatArea(areaM2: number, unit: BenchLengthUnit): string {

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { planConversion, type BlockInput, type EngineInput } from "@/lib/engineering/conversion-plan";
 import { extraFuelForMixtureChange } from "@/lib/engineering/stage-sizing";
-import { ALL_DRILLS, drillsFromLabels } from "@/lib/engineering/drills";
+import { ALL_DRILLS } from "@/lib/engineering/drills";
+import { drillRack } from "./drill-rack";
 import { GASOLINE } from "@/lib/engineering/fuels";
 import { PLANNER_ENGINE, PLANNER_PRIMARY, PLANNER_SECONDARY } from "../../support/job-fixtures";
 
@@ -88,7 +89,7 @@ describe("planConversion", () => {
     const stale = planConversion({
       engine,
       blocks: [{ ...primary, stages: [{ ...primary.stages[0]!, chosen: { count: 2, drillLabel: "#60" } }] }],
-      drills: drillsFromLabels(["#52", "#43", "1/16"]),
+      drills: drillRack(["#52", "#43", "1/16"]),
     });
     expect(stale.blocks[0]!.stages[0]!.chosenBy).toBe("solver");
     expect(stale.blocks[0]!.warnings.map((w) => w.message).join(" ")).toMatch(/no longer offered/);

@@ -9,10 +9,8 @@ import {
   INCH_DRILLS,
   findDrill,
   nearestDrill,
-  drillsFromLabels,
   fractionDrill,
   metricDrill,
-  drillInches,
 } from "@/lib/engineering/drills";
 import type { Drill, DrillSystem } from "@/lib/engineering/types";
 
@@ -21,7 +19,7 @@ const IN = 0.0254; // NIST SP 811: 1 in = 0.0254 m exactly
 function inches(label: string): number {
   const d = findDrill(label);
   if (d === undefined) throw new Error(`no drill ${label}`);
-  return drillInches(d);
+  return d.diameterM / IN;
 }
 
 describe("drill series", () => {
@@ -126,19 +124,6 @@ describe("findDrill", () => {
   // A bare number names no series: "2" could be #2 (0.221 in), 2 mm or 2 in; "43" likewise.
   it.each(["#81", "#0", "AA", "1/128", "2.53 mm", "0.5", "14 mm", "", "3/4", "43", "2", "2.5"])("finds no drill for %j", (input) => {
     expect(findDrill(input)).toBeUndefined();
-  });
-});
-
-describe("drillsFromLabels", () => {
-  it("returns the drills in the order given", () => {
-    expect(drillsFromLabels(["#43", "1/8", "3.30 mm"]).map((d) => d.label)).toEqual(["#43", "1/8", "3.30 mm"]);
-  });
-
-  it("names an unknown label, its place in the list and the forms it accepts", () => {
-    expect(() => drillsFromLabels(["#43", "#99"])).toThrow(/drills\.1: "#99" is not a standard drill size/);
-    expect(() => drillsFromLabels(["2"], "stock")).toThrow(/stock\.0: "2" does not say which drill series.*"#43".*"2\.5 mm"/);
-    // ASME B94.11M: #2 = 0.2210 in; letter A = 0.2340 in
-    expect(drillsFromLabels(["#2", "2 mm", "1/16", "A"]).map((d) => d.label)).toEqual(["#2", "2.00 mm", "1/16", "A"]);
   });
 });
 

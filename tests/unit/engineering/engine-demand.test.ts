@@ -2,14 +2,11 @@ import { describe, expect, it } from "vitest";
 import {
   GAMMA_AIR,
   R_AIR_J_PER_KG_K,
-  airMassFlow,
   chargeDensity,
   compressorOutletTemperature,
-  fuelMassFlowFromAir,
-  fuelMassFlowFromPower,
   intercoolerOutletTemperature,
 } from "@/lib/engineering/engine-demand";
-import { KG_PER_LB, PA_STANDARD_ATMOSPHERE, W_PER_HP } from "./nist-factors";
+import { PA_STANDARD_ATMOSPHERE } from "./nist-factors";
 
 function expectNear(actual: number, expected: number, rel = 1e-5) {
   expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
@@ -64,24 +61,5 @@ describe("intercoolerOutletTemperature", () => {
   it("removes the effectiveness share of the temperature difference", () => {
     // Hand: 393.863 - 0.7 x (393.863 - 300) = 393.863 - 65.7041 = 328.1589 K.
     expectNear(intercoolerOutletTemperature({ inletTemperatureK: 393.863, coolantTemperatureK: 300, effectiveness: 0.7 }), 328.1589);
-  });
-});
-
-describe("airMassFlow and fuel demand", () => {
-  it("gives a four-stroke engine's air flow", () => {
-    // Heywood, ch. 2, volumetric efficiency (from memory): m_air = VE x rho x V_d x N / 2, N in rev/s.
-    // Hand: 0.9 x 1.2 x 0.0057 m³ x (6000 / 60) / 2 = 0.9 x 1.2 x 0.0057 x 50 = 0.3078 kg/s.
-    expectNear(airMassFlow({ chargeDensityKgM3: 1.2, displacementM3: 0.0057, rpm: 6000, volumetricEfficiency: 0.9 }), 0.3078);
-  });
-
-  it("divides the air by the target AFR", () => {
-    // Hand: 0.3078 / 12.5 = 0.024624 kg/s.
-    expectNear(fuelMassFlowFromAir({ airMassFlowKgS: 0.3078, afr: 12.5 }), 0.024624);
-  });
-
-  it("multiplies power by BSFC", () => {
-    // 500 hp at 0.5 lb/(hp h). Hand: 500 x 0.5 = 250 lb/h; x 0.45359237 kg/lb = 113.39809 kg/h; / 3600 = 0.03149947 kg/s.
-    const bsfcKgPerJ = (0.5 * KG_PER_LB) / (W_PER_HP * 3600);
-    expectNear(fuelMassFlowFromPower({ brakePowerW: 500 * W_PER_HP, bsfcKgPerJ }), 0.03149947);
   });
 });

@@ -8,8 +8,6 @@ import {
   METHANOL,
   ethanolBlend,
   fuelProperties,
-  afrToLambda,
-  lambdaToAfr,
 } from "@/lib/engineering/fuels";
 
 // IUPAC standard atomic weights (conventional values, 2013 onwards): C 12.011, H 1.008, O 15.999.
@@ -141,27 +139,5 @@ describe("fuelProperties", () => {
     expect(() => fuelProperties({ kind: "custom", densityKgM3: 0.76, stoichAfr: 14 })).toThrow(/densityKgM3/);
     // A lambda typed where the ratio belongs
     expect(() => fuelProperties({ kind: "custom", densityKgM3: 760, stoichAfr: 0.8 })).toThrow(/stoichAfr/);
-  });
-});
-
-describe("lambda", () => {
-  it("converts AFR to lambda and back", () => {
-    // Definition: lambda = AFR / stoichiometric AFR (Heywood, section 3.3)
-    expect(afrToLambda(11.76, 14.7)).toBeCloseTo(0.8, 9);
-    expect(lambdaToAfr(0.8, 9.0)).toBeCloseTo(7.2, 9);
-  });
-
-  it("round-trips", () => {
-    fc.assert(
-      fc.property(fc.double({ min: 0.3, max: 3, noNaN: true }), fc.double({ min: 1, max: 20, noNaN: true }), (l, s) => {
-        expect(afrToLambda(lambdaToAfr(l, s), s)).toBeCloseTo(l, 9);
-      }),
-    );
-  });
-
-  it("refuses zero and negative values, naming the field", () => {
-    expect(() => afrToLambda(0, 14.7)).toThrow(/afr/);
-    expect(() => lambdaToAfr(1, -1)).toThrow(/stoichAfr/);
-    expect(() => lambdaToAfr(Number.NaN, 14.7)).toThrow(/lambda/);
   });
 });

@@ -6,9 +6,9 @@ import {
   DEFAULT_MIN_WEB_M,
   DEFAULT_SMALLEST_RESTRICTION_DRILL_LABEL,
   DEFAULT_SMALLEST_RESTRICTION_DRILL_M,
-  drillsOfSystem,
+  inDrillSystem,
+  isRestrictionDrill,
   restrictionDrillLimits,
-  restrictionDrills,
 } from "@/lib/engineering/restriction-limits";
 import { asmeDrill, M_PER_IN } from "./nist-factors";
 
@@ -28,26 +28,26 @@ describe("shop limit defaults", () => {
   });
 });
 
-describe("drillsOfSystem", () => {
+describe("inDrillSystem", () => {
   const rack = [D43, Q, D1_8, MM2_5];
 
   it("keeps one plan to one system unless mixed is asked", () => {
-    expect(drillsOfSystem(rack, "inch").map((d) => d.label)).toEqual(["#43", "Q", "1/8"]);
-    expect(drillsOfSystem(rack, "metric").map((d) => d.label)).toEqual(["2.50 mm"]);
-    expect(drillsOfSystem(rack, "mixed").map((d) => d.label)).toEqual(["#43", "Q", "1/8", "2.50 mm"]);
+    expect(rack.filter((d) => inDrillSystem(d.system, "inch")).map((d) => d.label)).toEqual(["#43", "Q", "1/8"]);
+    expect(rack.filter((d) => inDrillSystem(d.system, "metric")).map((d) => d.label)).toEqual(["2.50 mm"]);
+    expect(rack.filter((d) => inDrillSystem(d.system, "mixed")).map((d) => d.label)).toEqual(["#43", "Q", "1/8", "2.50 mm"]);
   });
 
   it("splits the standard series into the inch and the metric drills", () => {
-    expect(drillsOfSystem(ALL_DRILLS, "inch")).toEqual(INCH_DRILLS);
-    expect(drillsOfSystem(ALL_DRILLS, "metric")).toEqual([...METRIC_DRILLS].sort((a, b) => a.diameterM - b.diameterM));
+    expect(ALL_DRILLS.filter((d) => inDrillSystem(d.system, "inch"))).toEqual(INCH_DRILLS);
+    expect(ALL_DRILLS.filter((d) => inDrillSystem(d.system, "metric"))).toEqual([...METRIC_DRILLS].sort((a, b) => a.diameterM - b.diameterM));
   });
 
-  it("refuses an unknown system", () => {
-    expect(() => drillsOfSystem(rack, "imperial" as never)).toThrow(/system/);
+  it("refuses an unknown system for the limits", () => {
+    expect(() => restrictionDrillLimits({ system: "imperial" as never })).toThrow(/system/);
   });
 });
 
-describe("restrictionDrillLimits and restrictionDrills", () => {
+describe("restrictionDrillLimits", () => {
   it("uses the defaults where the shop set nothing", () => {
     expect(restrictionDrillLimits({ smallestDrillLabel: null, largestDrillLabel: null })).toEqual({
       system: "inch",
@@ -73,13 +73,15 @@ describe("restrictionDrillLimits and restrictionDrills", () => {
   it("keeps the drills from #70 to 1/8 of the plan's system", () => {
     // ASME B94.11M: number drills #31 (0.1200 in) to #70 (0.0280 in) are 40 sizes; fractions 1/32 to 1/8 in
     // 64ths are 2/64..8/64, 7 sizes (1/64 = 0.0156 in is under #70); letters start at A = 0.2340 in. 47 in all.
-    const inch = restrictionDrills(ALL_DRILLS, restrictionDrillLimits());
+    const inchLimits = restrictionDrillLimits();
+    const inch = ALL_DRILLS.filter((d) => isRestrictionDrill(d, inchLimits));
     expect(inch).toHaveLength(47);
     expect(inch[0]?.label).toBe("#70");
     expect(inch.at(-1)?.label).toBe("1/8");
     // Metric, 0.7112 mm to 3.175 mm: 0.75 to 2.95 mm in 0.05 mm steps, (2.95 - 0.75) / 0.05 + 1 = 45 sizes,
     // then 3.0 and 3.1 mm in 0.1 mm steps (the project's BS 328 subset): 47.
-    const metric = restrictionDrills(ALL_DRILLS, restrictionDrillLimits({ system: "metric" }));
+    const metricLimits = restrictionDrillLimits({ system: "metric" });
+    const metric = ALL_DRILLS.filter((d) => isRestrictionDrill(d, metricLimits));
     expect(metric).toHaveLength(47);
     expect(metric[0]?.label).toBe("0.75 mm");
     expect(metric.at(-1)?.label).toBe("3.10 mm");

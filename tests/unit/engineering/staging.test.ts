@@ -1,6 +1,5 @@
 import { describe, expect, it } from "vitest";
 import {
-  neededAreaAt,
   proposeStaging,
   stagingBalance,
   suppliedAreaAt,
@@ -11,11 +10,19 @@ import {
   venturiAirAt,
   type PowerValve,
   type StagingModel,
+  type ThrottleMode,
 } from "@/lib/engineering/staging";
 import { PA_PER_INHG, PA_PER_PSI, PA_STANDARD_ATMOSPHERE, asmeDrill } from "./nist-factors";
 
 function expectNear(actual: number, expected: number, rel = 1e-5) {
   expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
+}
+
+/** The area the target needs at one pressure, as the sweep reports it at its first point. */
+function sweptNeededArea(m: StagingModel, gaugePa: number, mode: ThrottleMode): number {
+  const sweep = sweepStaging(m, { fromGaugePa: gaugePa, toGaugePa: gaugePa + 1, points: 2, band: 0.05 });
+  expect(sweep.gaugePa[0]).toBe(gaugePa);
+  return sweep[mode].neededM2[0] as number;
 }
 
 const P0 = PA_STANDARD_ATMOSPHERE;
@@ -66,23 +73,23 @@ describe("supplied and needed area", () => {
   it("needs area growing as the square root of charge density", () => {
     // Base (supplied at zero gauge) = 4e-6 + 6e-6 + 1e-6 = 11e-6 m². At one atmosphere of boost at the same
     // temperature the density doubles: 11e-6 x sqrt(2) = 1.5556349e-5 m².
-    expectNear(neededAreaAt(m, P0, "full"), 1.5556349e-5);
+    expectNear(sweptNeededArea(m, P0, "full"), 1.5556349e-5);
     // Part throttle base = 4e-6 + 1e-6 = 5e-6 m² -> 7.0710678e-6 m².
-    expectNear(neededAreaAt(m, P0, "part"), 7.0710678e-6);
+    expectNear(sweptNeededArea(m, P0, "part"), 7.0710678e-6);
   });
 
   it("needs more where the target under boost is richer", () => {
     const richer = model([VACUUM], { target: { atmosphereAfr: 12.5, peakBoostAfr: 11.5, peakBoostGaugePa: 10 * PA_PER_PSI } });
     // Hand, at 10 psi = 68 947.57 Pa: density ratio (101 325 + 68 947.57) / 101 325 = 1.6804596, sqrt = 1.2963254;
     // x 12.5 / 11.5 (1.0869565) = 1.4090494; x 11e-6 = 1.5499543e-5 m².
-    expectNear(neededAreaAt(richer, 10 * PA_PER_PSI, "full"), 1.5499543e-5);
+    expectNear(sweptNeededArea(richer, 10 * PA_PER_PSI, "full"), 1.5499543e-5);
     // Hand, halfway (5 psi) the target is linear between: (12.5 + 11.5) / 2 = 12.0.
     expect(targetAfrAt(richer.target, 5 * PA_PER_PSI)).toBeCloseTo(12, 12);
   });
 
   it("keeps ambient density at the venturi under vacuum", () => {
     // The venturi sits above the throttle: at -10 inHg it still sees 101 325 Pa, so the needed area is the base.
-    expectNear(neededAreaAt(m, -10 * PA_PER_INHG, "full"), 11e-6, 1e-12);
+    expectNear(sweptNeededArea(m, -10 * PA_PER_INHG, "full"), 11e-6, 1e-12);
   });
 
   it("heats the charge through the compressor", () => {
@@ -90,7 +97,7 @@ describe("supplied and needed area", () => {
     // Hand: pressure ratio 2 at one atmosphere of boost: T = 300 x (1 + (2^0.2857143 - 1) / 0.7) = 393.863 K;
     // density ratio 2 x 300 / 393.863 = 1.5233724, sqrt = 1.2342497; x 11e-6 = 1.3576747e-5 m².
     expectNear(venturiAirAt(hot, P0).temperatureK, 393.863);
-    expectNear(neededAreaAt(hot, P0, "full"), 1.3576747e-5);
+    expectNear(sweptNeededArea(hot, P0, "full"), 1.3576747e-5);
   });
 });
 

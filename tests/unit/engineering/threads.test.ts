@@ -8,12 +8,11 @@ import {
   threadEngagementPct,
   tapDrill,
   clearanceDrill,
-  passagePlug,
-  setScrewFor,
-  type PassagePlugResult,
   type Thread,
 } from "@/lib/engineering/threads";
-import { INCH_DRILLS, METRIC_DRILLS, drillsFromLabels } from "@/lib/engineering/drills";
+import { passagePlug, setScrewFor, type PassagePlugResult } from "@/lib/engineering/passage-plug";
+import { INCH_DRILLS, METRIC_DRILLS } from "@/lib/engineering/drills";
+import { drillRack } from "./drill-rack";
 
 const IN = 0.0254; // NIST SP 811: 1 in = 0.0254 m exactly
 const MM = 0.001;
@@ -181,10 +180,10 @@ describe("tapDrill", () => {
   });
 
   it("chooses only from the drills given", () => {
-    const stock = drillsFromLabels(["#44", "3/32", "2.20 mm"]);
+    const stock = drillRack(["#44", "3/32", "2.20 mm"]);
     // 4-40 ideal 0.08764 in: #44 (0.0860) is 0.0016 off, 2.20 mm (0.0866) 0.0010 off, 3/32 (0.0938) 0.0061 off
     expect(tapDrill(thread("4-40"), { drills: stock }).drill.label).toBe("2.20 mm");
-    expect(() => tapDrill(thread("4-40"), { drills: drillsFromLabels(["1/4"]) })).toThrow(/drills/);
+    expect(() => tapDrill(thread("4-40"), { drills: drillRack(["1/4"]) })).toThrow(/drills/);
   });
 
   it("refuses an engagement above the basic minor diameter's 83.3 %, naming the field", () => {
@@ -203,10 +202,10 @@ describe("tapDrill", () => {
     // 4-40 at 83 %: ideal 0.112 - 0.83 x 0.0324760 = 0.08504 in. Of #45 (0.0820) and 3/32 (0.09375), #45 is nearer
     // (0.0030 off against 0.0087) but under the basic minor 0.08494 in worked above, so 3/32 is the answer:
     // (0.112 - 0.09375) / 0.0324760 = 56.2 %.
-    const r = tapDrill(thread("4-40"), { engagementPct: 83, drills: drillsFromLabels(["#45", "3/32"]) });
+    const r = tapDrill(thread("4-40"), { engagementPct: 83, drills: drillRack(["#45", "3/32"]) });
     expect(r.drill.label).toBe("3/32");
     expect(r.engagementPct).toBeCloseTo(56.2, 1);
-    expect(() => tapDrill(thread("4-40"), { drills: drillsFromLabels(["#45"]) })).toThrow(/drills: .*basic minor/);
+    expect(() => tapDrill(thread("4-40"), { drills: drillRack(["#45"]) })).toThrow(/drills: .*basic minor/);
   });
 
   it("gives the engagement of the formula and the nearest drill, for any thread and target", () => {
@@ -383,7 +382,7 @@ describe("passagePlug", () => {
         wallThicknessM: 0.25 * IN,
         depthAvailableM: 0.5 * IN,
         threads: [thread("6-32")],
-        drills: drillsFromLabels(["#36"]),
+        drills: drillRack(["#36"]),
       }),
     );
     expect(refusal.missing).toEqual({ thread: "#10-24 UNC", drill: "#25" });
@@ -398,7 +397,7 @@ describe("passagePlug", () => {
         wallThicknessM: 0.25 * IN,
         depthAvailableM: 0.5 * IN,
         threads: [thread("6-32")],
-        drills: drillsFromLabels(["#25", "#36"]),
+        drills: drillRack(["#25", "#36"]),
       }),
     );
     expect(refusal.missing).toEqual({ thread: "#10-24 UNC" });
@@ -412,7 +411,7 @@ describe("passagePlug", () => {
         wallThicknessM: 0.25 * IN,
         depthAvailableM: 0.5 * IN,
         threads: UNIFIED_THREADS,
-        drills: drillsFromLabels(["#50", "#52", "#55"]),
+        drills: drillRack(["#50", "#52", "#55"]),
       }),
     );
     expect(refusal.missing).toEqual({ drill: "#43" });
@@ -429,7 +428,7 @@ describe("passagePlug", () => {
         wallThicknessM: 0.25 * IN,
         depthAvailableM: 0.5 * IN,
         threads: UNIFIED_THREADS,
-        drills: drillsFromLabels(["#40", "#50"]),
+        drills: drillRack(["#40", "#50"]),
       }),
     );
     expect(refusal.missing).toEqual({ drill: "#43" });
@@ -445,7 +444,7 @@ describe("passagePlug", () => {
         wallThicknessM: 5 * MM,
         depthAvailableM: 10 * MM,
         threads: METRIC_THREADS,
-        drills: drillsFromLabels(["2.50 mm"]),
+        drills: drillRack(["2.50 mm"]),
       }),
     );
     expect(refusal.missing).toEqual({ drill: "3.00 mm" });

@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { standardAtmospherePressurePa } from "@/lib/engineering/atmosphere";
 import { planConversion, type BlockInput, type EngineInput } from "@/lib/engineering/conversion-plan";
-import { ALL_DRILLS, drillsFromLabels } from "@/lib/engineering/drills";
+import { ALL_DRILLS } from "@/lib/engineering/drills";
+import { drillRack } from "./drill-rack";
 import { GASOLINE } from "@/lib/engineering/fuels";
 import { M_PER_IN, PA_PER_INHG, PA_PER_PSI, PA_STANDARD_ATMOSPHERE } from "./nist-factors";
 
@@ -42,7 +43,7 @@ const secondary: BlockInput = {
   stages: [{ id: "s-b8", valve: { kind: "boost", setpointPa: 8 * PA_PER_PSI }, target: { kind: "lambda", from: 0.85, to: 0.78 }, mode: "full", maxHoles: 4 }],
 };
 
-const drills = drillsFromLabels(["#52", "#60", "#56", "#54", "#53", "#51", "#50", "#48", "#45", "#40", "#35", "#30"]);
+const drills = drillRack(["#52", "#60", "#56", "#54", "#53", "#51", "#50", "#48", "#45", "#40", "#35", "#30"]);
 
 describe("a stage's mixture target is read on the whole engine", () => {
   const plan = planConversion({ engine, blocks: [primary, secondary], drills });
@@ -111,7 +112,7 @@ describe("cruise under vacuum is judged against the cruise lambda", () => {
   // gives lambda 0.88. With the valve shut at cruise the primary alone gives 0.88 x 1.12 = 0.9856 (less area,
   // leaner): within 5 % of a cruise lambda of 1.0, but 12 % lean of the power target 0.88.
   const vacuum: BlockInput = { ...primary, stages: [{ id: "v", valve: { kind: "vacuum", ratingPa: 6.5 * PA_PER_INHG }, target: { kind: "percentMainJet", percent: 12 }, maxHoles: 4 }] };
-  const plan = planConversion({ engine, blocks: [vacuum], drills: drillsFromLabels(["#60", "#61", "#62", "#63", "#64", "#65"]) });
+  const plan = planConversion({ engine, blocks: [vacuum], drills: drillRack(["#60", "#61", "#62", "#63", "#64", "#65"]) });
 
   it("charts a healthy cruise as no lean zone", () => {
     const sweep = plan.staging.sweep;

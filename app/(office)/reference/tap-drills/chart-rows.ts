@@ -1,5 +1,6 @@
 import { drillDto, lengthPair, tidy, type DrillDto, type LengthPair } from "@/lib/format/quantity-pairs";
 import { ALL_THREADS, clearanceDrill, tapDrill, type Thread, type ThreadSystem } from "@/lib/engineering/threads";
+import { M_PER_IN } from "@/lib/engineering/unit-factors";
 
 /** One line of the tap-drill chart: a thread, its 75 % tap drill and its clearance drills. */
 export interface TapDrillRow {
@@ -28,7 +29,7 @@ function row(thread: Thread): TapDrillRow {
     series: thread.series,
     major: lengthPair(thread.majorM),
     pitch: lengthPair(thread.pitchM),
-    tpi: thread.system === "unified" ? Math.round(0.0254 / thread.pitchM) : null,
+    tpi: thread.system === "unified" ? Math.round(M_PER_IN / thread.pitchM) : null,
     tapDrill: drillDto(tap.drill),
     engagementPct: tidy(tap.engagementPct, 2),
     closeClearance: drillDto(clearanceDrill(thread, "close")),

@@ -10,6 +10,7 @@ import {
   DEFAULT_SMALLEST_RESTRICTION_DRILL_LABEL,
 } from "@/lib/engineering/restriction-limits";
 import type { DrillSystem } from "@/lib/engineering/types";
+import { M_PER_IN, M_PER_MM } from "@/lib/engineering/unit-factors";
 import { PageHeader, Sheet } from "@/components/ui/sheet";
 import { DrillRack, type RackGroup } from "./drill-rack";
 import { ShopLimits, type ShopLimitsValues } from "./limits-form";
@@ -24,12 +25,10 @@ const TITLES: Record<DrillSystem, string> = {
   metric: "Metric drills",
 };
 
-const M_PER_IN = 0.0254;
-
 export default async function DrillRackPage() {
   const user = await requireRole(OFFICE_ROLES, "/shop/drills");
   const [stocked, settings] = await Promise.all([listStockedLabels(), getShopSettings()]);
-  const number = (lengthM: number) => (user.lengthUnit === "mm" ? fixed(lengthM * 1000, 3) : fixed(lengthM / M_PER_IN, 4));
+  const number = (lengthM: number) => (user.lengthUnit === "mm" ? fixed(lengthM / M_PER_MM, 3) : fixed(lengthM / M_PER_IN, 4));
   const size = (diameterM: number) => `${number(diameterM)} ${user.lengthUnit}`;
   const drillShown = (label: string) => {
     const drill = findDrill(label);
@@ -50,7 +49,7 @@ export default async function DrillRackPage() {
       shown: size(settings.minWebM),
       isDefault: settings.isDefault.minWebM,
       // Six significant figures, so saving the form again does not round a web typed in the other unit.
-      stored: settings.isDefault.minWebM ? "" : String(Number((settings.minWebM / (user.lengthUnit === "mm" ? 0.001 : M_PER_IN)).toPrecision(6))),
+      stored: settings.isDefault.minWebM ? "" : String(Number((settings.minWebM / (user.lengthUnit === "mm" ? M_PER_MM : M_PER_IN)).toPrecision(6))),
     },
     defaults: {
       smallestRestrictionDrill: drillShown(DEFAULT_SMALLEST_RESTRICTION_DRILL_LABEL),

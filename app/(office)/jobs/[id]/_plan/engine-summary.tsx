@@ -3,7 +3,7 @@ import type { Job } from "@/db/schema";
 import type { DisplayLengthUnit } from "@/lib/format/display";
 import { FUEL_KIND_LABELS, fuelProperties } from "@/lib/engineering/fuels";
 import { fuelSpecOf } from "@/lib/jobs/plan";
-import { fromSI, STANDARD_ATMOSPHERE_PA } from "@/lib/engineering/units";
+import { fromSI, M_PER_FT, STANDARD_ATMOSPHERE_PA } from "@/lib/engineering/units";
 import { Fact, Facts } from "./facts";
 import { displacement, percent, power, psi, temperature } from "./format";
 
@@ -65,7 +65,7 @@ export function EngineSummary({ job, unit }: { job: EngineFacts; unit: DisplayLe
       <Fact label="Ambient pressure">
         {unit === "in" ? `${fromSI("pressure", job.ambientPressurePa ?? STANDARD_ATMOSPHERE_PA, "inHg").toFixed(2)} inHg` : `${fromSI("pressure", job.ambientPressurePa ?? STANDARD_ATMOSPHERE_PA, "kPa").toFixed(1)} kPa`}
         {job.siteElevationM !== null && job.siteElevationM !== undefined
-          ? ` · standard atmosphere at ${unit === "in" ? `${(job.siteElevationM / 0.3048).toFixed(0)} ft` : `${job.siteElevationM.toFixed(0)} m`}`
+          ? ` · standard atmosphere at ${unit === "in" ? `${(job.siteElevationM / M_PER_FT).toFixed(0)} ft` : `${job.siteElevationM.toFixed(0)} m`}`
           : " absolute"}
       </Fact>
       <Fact label="Cruise target">

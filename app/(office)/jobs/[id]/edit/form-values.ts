@@ -1,7 +1,7 @@
 import "server-only";
 import type { Job } from "@/db/schema";
 import type { DisplayLengthUnit } from "@/lib/format/display";
-import { fromSI } from "@/lib/engineering/units";
+import { fromSI, M_PER_FT } from "@/lib/engineering/units";
 import type { JobFieldsForm } from "../../job-fields-shape";
 
 /** A stored figure as a person would type it: six significant digits, no float noise. */
@@ -35,7 +35,7 @@ export function jobFormValues(job: Job, unit: DisplayLengthUnit): JobFieldsForm 
     intercoolerEffectivenessPct: typed(job.intercoolerEffectiveness * 100),
     useAllDrills: job.useAllDrills,
     ...(job.siteElevationM !== null
-      ? { siteElevation: inch ? { value: typed(job.siteElevationM / 0.3048), unit: "ft" as const } : { value: typed(job.siteElevationM), unit: "m" as const } }
+      ? { siteElevation: inch ? { value: typed(job.siteElevationM / M_PER_FT), unit: "ft" as const } : { value: typed(job.siteElevationM), unit: "m" as const } }
       : { ambientPressure: inch ? { value: typed(fromSI("pressure", job.ambientPressurePa, "inHg")), unit: "inHg" as const } : { value: typed(fromSI("pressure", job.ambientPressurePa, "kPa")), unit: "kPa" as const } }),
     cruiseLambda: job.cruiseLambda,
     drillSystem: job.drillSystem,

@@ -1,6 +1,8 @@
 import "server-only";
 import { drillDto, lengthPair, tidy, type DrillDto, type LengthPair } from "@/lib/format/quantity-pairs";
-import { ALL_THREADS, clearanceDrill, METRIC_THREADS, parseThread, passagePlug, tapDrill, UNIFIED_THREADS, type Thread } from "@/lib/engineering/threads";
+import { passagePlug } from "@/lib/engineering/passage-plug";
+import { ALL_THREADS, clearanceDrill, METRIC_THREADS, parseThread, tapDrill, UNIFIED_THREADS, type Thread } from "@/lib/engineering/threads";
+import { M_PER_IN } from "@/lib/engineering/unit-factors";
 import type { Drill } from "@/lib/engineering/types";
 import { toSI } from "@/lib/engineering/units";
 import { RequestRefusal } from "@/db/refusal";
@@ -19,7 +21,7 @@ function threadDto(thread: Thread): ThreadDto {
     label: thread.label,
     major: lengthPair(thread.majorM),
     pitch: lengthPair(thread.pitchM),
-    tpi: thread.system === "unified" ? Math.round(0.0254 / thread.pitchM) : null,
+    tpi: thread.system === "unified" ? Math.round(M_PER_IN / thread.pitchM) : null,
   };
 }
 
