@@ -6,7 +6,7 @@ import { QuantityField } from "@/components/forms/quantity-field";
 import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Select } from "@/components/ui/field";
-import { FORM_LENGTH_UNITS, type FormLengthUnit } from "@/lib/forms/units";
+import { FORM_LENGTH_UNITS, type FormLengthUnit } from "@/lib/forms/quantity/units";
 import { saveShopLimitsAction } from "./actions";
 import { shopLimitsSchema } from "./schema";
 

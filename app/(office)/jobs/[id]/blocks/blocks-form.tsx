@@ -5,7 +5,7 @@ import { useActionState } from "react";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { FieldErrors, FormMessage } from "@/components/ui/field";
 import type { FormResult } from "@/lib/forms/form-action";
-import type { FormLengthUnit } from "@/lib/forms/units";
+import type { FormLengthUnit } from "@/lib/forms/quantity/units";
 import { BlockFields } from "./block-fields";
 import { newBlock, type BlocksForm } from "./form-shape";
 import { submitInPlace } from "./submit-in-place";

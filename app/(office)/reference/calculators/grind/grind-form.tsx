@@ -9,7 +9,7 @@ import { ResultPending } from "@/components/forms/readings";
 import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button } from "@/components/ui/button";
 import type { DisplayLengthUnit } from "@/lib/format/display";
-import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/quantity/units";
 import { grindPlanAction } from "./actions";
 import { GrindResults } from "./grind-results";
 import { grindSchema } from "./schema";

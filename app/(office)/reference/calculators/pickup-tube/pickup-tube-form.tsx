@@ -9,7 +9,7 @@ import { Reading, Readings, ResultPanel, ResultPending } from "@/components/form
 import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button } from "@/components/ui/button";
 import { formatLength, type DisplayLengthUnit } from "@/lib/format/display";
-import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/quantity/units";
 import { pickupTubeAction } from "./actions";
 import { pickupTubeSchema } from "./schema";
 

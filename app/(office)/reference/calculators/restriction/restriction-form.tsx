@@ -10,7 +10,7 @@ import { SelectField } from "@/components/forms/select-field";
 import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button } from "@/components/ui/button";
 import type { DisplayLengthUnit } from "@/lib/format/display";
-import { areaUnitFor, FORM_AREA_UNITS, FORM_LENGTH_UNITS } from "@/lib/forms/units";
+import { areaUnitFor, FORM_AREA_UNITS, FORM_LENGTH_UNITS } from "@/lib/forms/quantity/units";
 import { restrictionAction } from "./actions";
 import { RestrictionResults } from "./restriction-results";
 import { restrictionSchema } from "./schema";

@@ -10,7 +10,7 @@ import { SelectField } from "@/components/forms/select-field";
 import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button } from "@/components/ui/button";
 import type { DisplayLengthUnit } from "@/lib/format/display";
-import { areaUnitFor, FORM_AREA_UNITS, FORM_BOOST_UNITS, FORM_LENGTH_UNITS, FORM_TEMPERATURE_UNITS } from "@/lib/forms/units";
+import { areaUnitFor, FORM_AREA_UNITS, FORM_BOOST_UNITS, FORM_LENGTH_UNITS, FORM_TEMPERATURE_UNITS } from "@/lib/forms/quantity/units";
 import { stagingAction } from "./actions";
 import { stagingSchema } from "./schema";
 import { StagingResults } from "./staging-results";

@@ -11,7 +11,7 @@ import { useCalculatorAction } from "@/components/forms/use-calculator-action";
 import { Button } from "@/components/ui/button";
 import { Tag } from "@/components/ui/sheet";
 import { drillSize, fixed, formatLength, type DisplayLengthUnit } from "@/lib/format/display";
-import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/quantity/units";
 import { passagePlugAction } from "./actions";
 import { passagePlugSchema } from "./schema";
 
