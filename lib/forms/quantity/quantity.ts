@@ -79,5 +79,10 @@ function isLeftOut(raw: unknown): boolean {
 
 /** The same field, optional: absent, or an empty value box, means "not given" (undefined). */
 export function optionalQuantity<const U extends Units>(label: string, units: U, rules: QuantityRules = { min: 0 }) {
-  return z.preprocess((raw) => (isLeftOut(raw) ? undefined : raw), quantity(label, units, rules).optional());
+  const field = quantity(label, units, rules);
+  // Typed by what the form holds (the quantity's own input), not the preprocess step's `unknown`.
+  return z.preprocess((raw) => (isLeftOut(raw) ? undefined : raw), field.optional()) as unknown as z.ZodType<
+    z.output<typeof field> | undefined,
+    z.input<typeof field> | undefined
+  >;
 }
