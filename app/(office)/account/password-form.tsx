@@ -2,7 +2,6 @@
 
 import { getInputProps } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
-import { useActionState } from "react";
 import { useServerForm } from "@/components/forms/use-server-form";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Input } from "@/components/ui/field";
@@ -32,9 +31,9 @@ export function PasswordForm() {
 }
 
 export function SignOutEverywhereForm() {
-  const [result, action, pending] = useActionState(signOutEverywhereAction, undefined);
+  const { formProps, lastResult: result, pending } = useServerForm(signOutEverywhereAction, { id: "sign-out-everywhere" });
   return (
-    <form action={action} aria-label="Sign out everywhere" className="flex flex-col gap-2">
+    <form {...formProps} aria-label="Sign out everywhere" className="flex flex-col gap-2">
       <FormMessage errors={result?.error?.[""] ?? undefined} />
       <Button type="submit" variant="secondary" disabled={pending}>
         {pending ? "Signing out…" : "Sign out on every device"}
