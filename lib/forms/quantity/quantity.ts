@@ -72,7 +72,7 @@ export function quantity<const U extends Units>(label: string, units: U, rules: 
 /** True when a quantity was left out: no object, or an empty value box (a unit select always sends its unit). */
 function isLeftOut(raw: unknown): boolean {
   if (raw === undefined || raw === null || raw === "") return true;
-  if (typeof raw !== "object" || !("value" in raw)) return false;
+  if (typeof raw !== "object" || Array.isArray(raw)) return false;
   const value = (raw as { value?: unknown }).value;
   return value === undefined || value === null || value === "";
 }
