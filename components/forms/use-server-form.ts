@@ -8,7 +8,7 @@ import type { FormResult } from "@/lib/forms/form-action";
 /** A server action made with runFormAction, in the shape useActionState calls it. */
 export type ServerFormAction<Data> = (previous: FormResult<Data> | undefined, formData: FormData) => Promise<FormResult<Data>>;
 
-/** useForm's options but the two this hook supplies (Conform's own type, from the package useForm is built on). */
+/** useForm's options, less the last answer and the submit handler this hook supplies (Conform's own type, from the package useForm is built on). */
 type ServerFormOptions<Schema extends Record<string, unknown>, FormValue> = Omit<FormOptions<Schema, string[], FormValue>, "formId" | "lastResult" | "onSubmit"> & {
   id?: string;
 };
