@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { quantity, optionalQuantity } from "@/lib/forms/quantity-input";
+import { optionalQuantity } from "@/lib/forms/quantity/quantity";
+import { optionalQuantityInSI, quantityInSI } from "@/lib/forms/quantity/si";
 import { JOB_STATES } from "@/db/job-states";
 import { SITE_ELEVATION_RANGE_M } from "@/lib/engineering/atmosphere";
 import { M_PER_FT, M_PER_IN as IN, PA_PER_INHG, PA_PER_PSI as PSI } from "@/lib/engineering/unit-factors";
@@ -16,51 +17,39 @@ const lambda = (label: string) =>
 const percent = (label: string, min = 1, max = 100) =>
   z.coerce.number({ error: `Enter ${label}.` }).min(min, { error: `${label} must be ${min}-${max} %.` }).max(max, { error: `${label} must be ${min}-${max} %.` });
 
-/** A site elevation as { value, unit } in m or ft, parsed to metres within the range a shop plans for. */
-const siteElevation = z
-  .object(
-    {
-      value: z.coerce.number({ error: "Enter the site elevation." }).refine(Number.isFinite, { error: "Enter the site elevation as a number." }),
-      unit: z.enum(["m", "ft"], { error: "site elevation: the unit must be one of m, ft." }),
-    },
-    { error: "Enter the site elevation." },
-  )
-  .transform((q, ctx) => {
-    const m = q.unit === "ft" ? q.value * M_PER_FT : q.value;
-    if (m < SITE_ELEVATION_RANGE_M.min || m > SITE_ELEVATION_RANGE_M.max) {
-      ctx.addIssue({ code: "custom", path: ["value"], message: `The site elevation must be between ${SITE_ELEVATION_RANGE_M.min} and ${SITE_ELEVATION_RANGE_M.max} m.` });
-      return z.NEVER;
-    }
-    return m;
-  });
 
-const optionalSiteElevation = z.preprocess((raw) => {
-  if (raw === undefined || raw === null || raw === "") return undefined;
-  if (typeof raw === "object" && raw !== null && "value" in raw) {
-    const value = (raw as { value?: unknown }).value;
-    if (value === undefined || value === null || value === "") return undefined;
+/** A site elevation in m or ft, parsed to metres within the range a shop plans for (below sea level too). */
+function siteElevationInMetres(q: { value: number; unit: "m" | "ft" }, ctx: z.RefinementCtx) {
+  const m = q.unit === "ft" ? q.value * M_PER_FT : q.value;
+  if (m < SITE_ELEVATION_RANGE_M.min || m > SITE_ELEVATION_RANGE_M.max) {
+    ctx.addIssue({ code: "custom", path: ["value"], message: `The site elevation must be between ${SITE_ELEVATION_RANGE_M.min} and ${SITE_ELEVATION_RANGE_M.max} m.` });
+    return z.NEVER;
   }
-  return raw;
-}, siteElevation.optional());
+  return m;
+}
+
+const optionalSiteElevation = optionalQuantity("site elevation", ["m", "ft"], {}).transform((q, ctx) =>
+  q === undefined ? undefined : siteElevationInMetres(q, ctx),
+);
 
 const checkbox = z.preprocess((v) => v === true || v === "on" || v === "true", z.boolean());
 
 export const jobFieldsSchema = z.object({
   carburetor: z.string({ error: "Describe the carburetor." }).trim().min(3, { error: "Describe the carburetor." }).max(200),
-  displacement: quantity("displacement", "displacement", { max: 0.02 }, ["L", "in³", "cc"]),
+  displacement: quantityInSI("displacement", "displacement", ["L", "in³", "cc"], { min: 0, si: { max: 0.02 } }),
   fuelKind: z.enum(["gasoline", "ethanol", "methanol", "blend", "custom"], { error: "Choose the fuel." }),
   ethanolPct: percent("ethanol content", 0, 100).optional(),
   fuelDensityKgM3: z.coerce.number().min(500, { error: "Fuel density must be 500-1500 kg/m³." }).max(1500, { error: "Fuel density must be 500-1500 kg/m³." }).optional(),
   fuelStoichAfr: z.coerce.number().min(1, { error: "Stoichiometric AFR must be 1-20." }).max(20, { error: "Stoichiometric AFR must be 1-20." }).optional(),
-  targetPower: optionalQuantity("power", "target power", { max: 5e6 }, ["hp", "kW"]),
-  peakBoost: quantity("pressure", "peak boost", { max: 60 * PSI }, ["psi", "kPa", "bar"]),
+  targetPower: optionalQuantityInSI("power", "target power", ["hp", "kW"], { min: 0, si: { max: 5e6 } }),
+  peakBoost: quantityInSI("pressure", "peak boost", ["psi", "kPa", "bar"], { min: 0, si: { max: 60 * PSI } }),
   targetLambdaAtmosphere: lambda("target lambda at atmospheric pressure"),
   targetLambdaPeak: lambda("target lambda at peak boost"),
   intercooled: checkbox,
-  chargeTemperature: optionalQuantity("temperature", "charge temperature", {}, ["°F", "°C", "K"]),
-  ambientTemperature: quantity("temperature", "ambient temperature", {}, ["°F", "°C", "K"]),
+  chargeTemperature: optionalQuantityInSI("temperature", "charge temperature", ["°F", "°C", "K"], {}),
+  ambientTemperature: quantityInSI("temperature", "ambient temperature", ["°F", "°C", "K"], {}),
   // Absolute (a barometer's station reading): 50-110 kPa spans every inhabited site and weather.
-  ambientPressure: optionalQuantity("pressure", "ambient pressure", { min: 50_000, max: 110_000 }, ["kPa", "inHg", "psi"]),
+  ambientPressure: optionalQuantityInSI("pressure", "ambient pressure", ["kPa", "inHg", "psi"], { min: 0, si: { min: 50_000, max: 110_000 } }),
   siteElevation: optionalSiteElevation,
   cruiseLambda: lambda("cruise lambda").optional(),
   drillSystem: z.enum(["inch", "metric", "mixed"], { error: "drillSystem must be inch, metric or mixed." }).optional(),
@@ -113,14 +102,14 @@ export type UpdateJobInput = z.output<typeof updateJobSchema>;
 const stageSchema = z
   .object({
     valveKind: z.enum(["vacuum", "boost"], { error: "Choose the valve: vacuum or boost-referenced." }),
-    vacuumRating: optionalQuantity("pressure", "vacuum rating", { max: 30 * PA_PER_INHG }, ["inHg", "kPa"]),
-    setpoint: optionalQuantity("pressure", "opening pressure", { max: 60 * PSI }, ["psi", "kPa", "bar"]),
+    vacuumRating: optionalQuantityInSI("pressure", "vacuum rating", ["inHg", "kPa"], { min: 0, si: { max: 30 * PA_PER_INHG } }),
+    setpoint: optionalQuantityInSI("pressure", "opening pressure", ["psi", "kPa", "bar"], { min: 0, si: { max: 60 * PSI } }),
     targetKind: z.enum(["afr", "lambda", "percentMainJet", "area"], { error: "Choose how the enrichment is given." }),
     mode: z.enum(["part", "full"], { error: "mode must be part (primary side alone) or full (both sides)." }).optional(),
     targetFrom: z.coerce.number().positive({ error: "Enter the mixture before the stage opens." }).optional(),
     targetTo: z.coerce.number({ error: "Enter the enrichment target." }).positive({ error: "The enrichment target must be greater than 0." }).optional(),
-    targetArea: optionalQuantity("area", "target area", { max: 1 * IN * IN }, ["in²", "mm²"]),
-    valveWindowArea: optionalQuantity("area", "valve window area", { max: 1 * IN * IN }, ["in²", "mm²"]),
+    targetArea: optionalQuantityInSI("area", "target area", ["in²", "mm²"], { min: 0, si: { max: 1 * IN * IN } }),
+    valveWindowArea: optionalQuantityInSI("area", "valve window area", ["in²", "mm²"], { min: 0, si: { max: 1 * IN * IN } }),
     maxHoles: z.coerce.number({ error: "Holes must be 1 to 4." }).int({ error: "Holes must be 1 to 4." }).min(1, { error: "Holes must be 1 to 4." }).max(4, { error: "Holes must be 1 to 4." }),
   })
   .superRefine((stage, ctx) => {
@@ -144,20 +133,20 @@ const stageSchema = z
     }
   });
 
-const length = (label: string) => optionalQuantity("length", label, { max: 0.1 }, ["in", "mm"]);
+const length = (label: string) => optionalQuantityInSI("length", label, ["in", "mm"], { min: 0, si: { max: 0.1 } });
 
 export const blockSchema = z.object({
   side: z.enum(["primary", "secondary"], { error: "Choose the side: primary or secondary." }),
-  mainJetDiameter: quantity("length", "main-jet diameter", { max: 0.25 * IN }, ["in", "mm"]),
+  mainJetDiameter: quantityInSI("length", "main-jet diameter", ["in", "mm"], { min: 0, si: { max: 0.25 * IN } }),
   mainJetCount: z.coerce.number({ error: "Main jets must be 1 to 4." }).int().min(1, { error: "Main jets must be 1 to 4." }).max(4, { error: "Main jets must be 1 to 4." }),
   channelLength: length("channel length"),
-  minWeb: optionalQuantity("length", "minimum web", { max: 0.1, allowZero: true }, ["in", "mm"]),
+  minWeb: optionalQuantityInSI("length", "minimum web", ["in", "mm"], { min: 0, minInclusive: true, si: { max: 0.1 } }),
   passageDiameter: length("vacuum passage diameter"),
   passageWall: length("wall around the passage"),
   passageDepth: length("depth available at the passage"),
   valveProtrusion: length("valve protrusion"),
   runningClearance: length("running clearance"),
-  measuredGap: optionalQuantity("length", "measured clay gap", { max: 0.1, allowZero: true }, ["in", "mm"]),
+  measuredGap: optionalQuantityInSI("length", "measured clay gap", ["in", "mm"], { min: 0, minInclusive: true, si: { max: 0.1 } }),
   bossWall: length("boss wall"),
   tubeRun1: length("first straight run"),
   tubeRun2: length("second straight run"),

@@ -1,8 +1,8 @@
 "use client";
 
-import { getFormProps, getInputProps, useForm } from "@conform-to/react";
+import { getInputProps } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
-import { useActionState } from "react";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Input } from "@/components/ui/field";
 import { NewPasswordFields } from "@/components/forms/new-password-fields";
@@ -10,16 +10,14 @@ import { changePasswordAction, signOutEverywhereAction } from "./actions";
 import { changePasswordSchema } from "./schema";
 
 export function PasswordForm() {
-  const [lastResult, action, pending] = useActionState(changePasswordAction, undefined);
-  const [form, fields] = useForm({
+  const { form, fields, formProps, pending } = useServerForm(changePasswordAction, {
     id: "change-password",
-    lastResult,
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate: ({ formData }) => parseWithZod(formData, { schema: changePasswordSchema }),
   });
   return (
-    <form {...getFormProps(form)} action={action} aria-label="Change your password" className="flex flex-col gap-4" noValidate>
+    <form {...formProps} aria-label="Change your password" className="flex flex-col gap-4" noValidate>
       <FormMessage errors={form.errors} />
       <Field label="Current password" htmlFor={fields.currentPassword.id} errors={fields.currentPassword.errors} errorId={fields.currentPassword.errorId}>
         <Input {...getInputProps(fields.currentPassword, { type: "password" })} key={fields.currentPassword.key} autoComplete="current-password" />
@@ -33,9 +31,9 @@ export function PasswordForm() {
 }
 
 export function SignOutEverywhereForm() {
-  const [result, action, pending] = useActionState(signOutEverywhereAction, undefined);
+  const { formProps, lastResult: result, pending } = useServerForm(signOutEverywhereAction, { id: "sign-out-everywhere" });
   return (
-    <form action={action} aria-label="Sign out everywhere" className="flex flex-col gap-2">
+    <form {...formProps} aria-label="Sign out everywhere" className="flex flex-col gap-2">
       <FormMessage errors={result?.error?.[""] ?? undefined} />
       <Button type="submit" variant="secondary" disabled={pending}>
         {pending ? "Signing out…" : "Sign out on every device"}

@@ -1,6 +1,6 @@
 "use client";
 
-import { useActionState } from "react";
+import { useServerForm } from "@/components/forms/use-server-form";
 import type { DisplayLengthUnit } from "@/lib/format/display";
 import { setLengthUnitAction } from "./actions";
 
@@ -11,10 +11,10 @@ const CHOICES: { unit: DisplayLengthUnit; label: string; title: string }[] = [
 
 /** Two-way inch/mm switch. Works without JavaScript: each half is a submit button of one small form. */
 export function LengthUnitSwitch({ unit }: { unit: DisplayLengthUnit }) {
-  const [result, action, pending] = useActionState(setLengthUnitAction, undefined);
+  const { formProps, lastResult: result, pending } = useServerForm(setLengthUnitAction, { id: "length-unit" });
   const failed = result && result.httpStatus !== 200;
   return (
-    <form action={action} className="no-print flex items-center gap-2" aria-label="Length unit">
+    <form {...formProps} className="no-print flex items-center gap-2" aria-label="Length unit">
       <span className="text-xs font-semibold uppercase tracking-wider text-pencil" id="length-unit-label">
         Sizes in
       </span>

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/quantity/units";
 
 /** The inch/mm switch: which unit lengths and areas are shown in, remembered per user. */
 export const lengthUnitSchema = z.object({

@@ -1,6 +1,6 @@
 "use client";
 
-import { useActionState } from "react";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/field";
 import type { FormResult } from "@/lib/forms/form-action";
@@ -27,12 +27,12 @@ export function StateControls({
   /** Danger warnings in the plan an approval would keep: approving needs an explicit acknowledgement. */
   dangers?: number;
 }) {
-  const [result, formAction, pending] = useActionState(action, undefined);
+  const { formProps, lastResult: result, pending } = useServerForm(action, { id: "job-state" });
   const refused =
     result && result.httpStatus !== 200 ? (result.error?.[""] ?? result.error?.to ?? result.error?.acknowledgeWarnings ?? ["Not done."]) : undefined;
   const approving = moves.some((m) => m.to === "planned");
   return (
-    <form action={formAction} aria-label="Job state" className="flex flex-col items-end gap-2">
+    <form {...formProps} aria-label="Job state" className="flex flex-col items-end gap-2">
       <div className="flex flex-wrap justify-end gap-2">
         {moves.length === 0 ? <p className="max-w-sm text-right text-sm text-graphite">{idle}</p> : null}
         {moves.map((move) => (

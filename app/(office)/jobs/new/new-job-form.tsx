@@ -1,12 +1,12 @@
 "use client";
 
-import { getFormProps, getInputProps, getTextareaProps, useForm } from "@conform-to/react";
+import { getInputProps, getTextareaProps } from "@conform-to/react";
 import Link from "next/link";
 import { FieldGroup } from "@/components/forms/calculator-form";
 import { NumberField } from "@/components/forms/number-field";
 import { QuantityField } from "@/components/forms/quantity-field";
 import { SelectField } from "@/components/forms/select-field";
-import { useCalculatorAction } from "@/components/forms/use-calculator-action";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button, buttonClass } from "@/components/ui/button";
 import { Field, FormMessage, Input, Textarea } from "@/components/ui/field";
 import { createJobAction } from "./actions";
@@ -65,13 +65,8 @@ export function NewJobForm({
   me: Choice;
   unitSystem: "imperial" | "metric";
 }) {
-  // Submitted in a transition (not as a bare form action), so React does not clear what was typed when the
-  // server sends errors back.
-  const { lastResult, action, pending, onSubmit } = useCalculatorAction(createJobAction);
-  const [form, fields] = useForm<NewJobFields>({
+  const { form, fields, formProps, pending } = useServerForm(createJobAction, {
     id: "new-job",
-    lastResult,
-    onSubmit,
     defaultValue: startingValues(unitSystem, me.id),
     // Checked on the server only (the unit conversion lives there): no round trip per keystroke.
     shouldValidate: "onSubmit",
@@ -82,7 +77,7 @@ export function NewJobForm({
   const intercooled = fields.intercooled.value === "on";
 
   return (
-    <form {...getFormProps(form)} action={action} aria-label="New job" className="flex flex-col gap-7" noValidate>
+    <form {...formProps} aria-label="New job" className="flex flex-col gap-7" noValidate>
       <FormMessage errors={form.errors} />
 
       <FieldGroup title="Customer and tuner" columns={3}>

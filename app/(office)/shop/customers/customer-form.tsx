@@ -1,9 +1,9 @@
 "use client";
 
-import { getFormProps, getInputProps, getTextareaProps, useForm } from "@conform-to/react";
+import { getInputProps, getTextareaProps } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import Link from "next/link";
-import { useCalculatorAction } from "@/components/forms/use-calculator-action";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button, buttonClass } from "@/components/ui/button";
 import { Field, FormMessage, Input, Textarea } from "@/components/ui/field";
 import { createCustomerAction, updateCustomerAction } from "./actions";
@@ -20,13 +20,9 @@ export interface CustomerFormValues {
 /** Adds a customer, or edits the one given. */
 export function CustomerForm({ customer }: { customer?: CustomerFormValues }) {
   const editing = customer !== undefined;
-  // Run in a transition so React does not reset the fields behind Conform's back (edits stay visible).
-  const { lastResult, action, pending, onSubmit } = useCalculatorAction(editing ? updateCustomerAction : createCustomerAction);
   const schema = editing ? updateCustomerSchema : customerSchema;
-  const [form, fields] = useForm({
+  const { form, fields, formProps, lastResult, pending } = useServerForm(editing ? updateCustomerAction : createCustomerAction, {
     id: editing ? `customer-${customer.customerId}` : "new-customer",
-    lastResult,
-    onSubmit,
     defaultValue: customer
       ? { name: customer.name, email: customer.email ?? "", phone: customer.phone ?? "", notes: customer.notes }
       : undefined,
@@ -36,8 +32,7 @@ export function CustomerForm({ customer }: { customer?: CustomerFormValues }) {
   });
   return (
     <form
-      {...getFormProps(form)}
-      action={action}
+      {...formProps}
       aria-label={editing ? `Edit ${customer.name}` : "Add a customer"}
       className="flex flex-col gap-4"
       noValidate

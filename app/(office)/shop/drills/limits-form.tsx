@@ -1,12 +1,12 @@
 "use client";
 
-import { getFormProps, getSelectProps, useForm } from "@conform-to/react";
+import { getSelectProps } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { QuantityField } from "@/components/forms/quantity-field";
-import { useCalculatorAction } from "@/components/forms/use-calculator-action";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Select } from "@/components/ui/field";
-import { FORM_LENGTH_UNITS, type FormLengthUnit } from "@/lib/forms/units";
+import { FORM_LENGTH_UNITS, type FormLengthUnit } from "@/lib/forms/quantity/units";
 import { saveShopLimitsAction } from "./actions";
 import { shopLimitsSchema } from "./schema";
 
@@ -71,12 +71,8 @@ export function ShopLimits({
 }
 
 function ShopLimitsForm({ values, groups, unit }: { values: ShopLimitsValues; groups: DrillChoiceGroup[]; unit: FormLengthUnit }) {
-  // Run in a transition so React does not reset the fields behind Conform's back (the saved values stay shown).
-  const { lastResult, action, pending, onSubmit } = useCalculatorAction(saveShopLimitsAction);
-  const [form, fields] = useForm({
+  const { form, fields, formProps, lastResult, pending } = useServerForm(saveShopLimitsAction, {
     id: "shop-limits",
-    lastResult,
-    onSubmit,
     defaultValue: {
       smallestRestrictionDrill: values.smallestRestrictionDrill.stored,
       largestRestrictionDrill: values.largestRestrictionDrill.stored,
@@ -103,7 +99,7 @@ function ShopLimitsForm({ values, groups, unit }: { values: ShopLimitsValues; gr
     </Field>
   );
   return (
-    <form {...getFormProps(form)} action={action} aria-label="Restriction limits" className="flex max-w-xl flex-col gap-4" noValidate>
+    <form {...formProps} aria-label="Restriction limits" className="flex max-w-xl flex-col gap-4" noValidate>
       <FormMessage errors={form.errors} success={lastResult?.httpStatus === 200 ? lastResult.message : undefined} />
       {drillSelect(
         fields.smallestRestrictionDrill,

@@ -1,8 +1,8 @@
 import { z } from "zod";
 import { ALL_DRILLS } from "@/lib/engineering/drills";
 import { DEFAULT_LARGEST_RESTRICTION_DRILL_LABEL, DEFAULT_SMALLEST_RESTRICTION_DRILL_LABEL } from "@/lib/engineering/restriction-limits";
-import { optionalFormQuantity } from "@/lib/forms/form-schema";
-import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
+import { optionalQuantity } from "@/lib/forms/quantity/quantity";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/quantity/units";
 
 // Changes to the drill rack: one drill by its label, or a whole series at once.
 
@@ -41,7 +41,7 @@ export const shopLimitsSchema = z
   .object({
     smallestRestrictionDrill: restrictionDrill("The smallest restriction drill"),
     largestRestrictionDrill: restrictionDrill("The largest restriction drill"),
-    minWeb: optionalFormQuantity("least web", FORM_LENGTH_UNITS, { min: 0, minInclusive: true }),
+    minWeb: optionalQuantity("least web", FORM_LENGTH_UNITS, { min: 0, minInclusive: true }),
   })
   .superRefine((v, ctx) => {
     const smallest = v.smallestRestrictionDrill ?? DEFAULT_SMALLEST_RESTRICTION_DRILL_LABEL;

@@ -1,24 +1,22 @@
 "use client";
 
-import { getFormProps, getInputProps, getSelectProps, useForm } from "@conform-to/react";
+import { getInputProps, getSelectProps } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
-import { useActionState } from "react";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Input, Select } from "@/components/ui/field";
 import { createUserAction } from "./actions";
 import { createUserSchema } from "./schema";
 
 export function CreateUserForm() {
-  const [lastResult, action, pending] = useActionState(createUserAction, undefined);
-  const [form, fields] = useForm({
+  const { form, fields, formProps, lastResult, pending } = useServerForm(createUserAction, {
     id: "create-user",
-    lastResult,
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate: ({ formData }) => parseWithZod(formData, { schema: createUserSchema }),
   });
   return (
-    <form {...getFormProps(form)} action={action} aria-label="Add a user" className="flex flex-col gap-4" noValidate>
+    <form {...formProps} aria-label="Add a user" className="flex flex-col gap-4" noValidate>
       <FormMessage errors={form.errors} success={lastResult?.httpStatus === 200 ? lastResult.message : undefined} />
       <Field label="Name" htmlFor={fields.name.id} errors={fields.name.errors} errorId={fields.name.errorId}>
         <Input {...getInputProps(fields.name, { type: "text" })} key={fields.name.key} />

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { formText } from "@/lib/forms/form-schema";
+import { formText } from "@/lib/forms/text-field";
 import { newPasswordField, refusePersonalPassword } from "@/lib/auth/password-policy";
 
 const roleSchema = z.enum(["admin", "tuner", "machinist"], { error: "Choose a role: admin, tuner or machinist." });

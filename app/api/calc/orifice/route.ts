@@ -3,13 +3,21 @@ import { apiError, apiRoute } from "@/lib/http/api-route";
 import { areaIn2, areaMm2, tidy } from "@/lib/format/quantity-pairs";
 import { fuelProperties } from "@/lib/engineering/fuels";
 import { areaFromMassFlow, diameterForArea } from "@/lib/engineering/orifice";
-import { fromSI, toSI } from "@/lib/engineering/units";
-import { flowUnitSchema, fuelDensity, fuelSchema, isMassFlowUnit, positiveNumber, positiveQuantity, pressureUnitSchema } from "@/lib/forms/quantity-schema";
+import { fromSI, MASS_FLOW_UNITS, PRESSURE_UNITS, toSI, VOLUME_FLOW_UNITS, type MassFlowUnit } from "@/lib/engineering/units";
+import { fuelDensity, positiveNumber } from "@/lib/forms/quantity/figures";
+import { quantity } from "@/lib/forms/quantity/quantity";
+import { fuelSchema } from "@/lib/forms/trade-fields";
+
+const FLOW_UNITS = [...MASS_FLOW_UNITS, ...VOLUME_FLOW_UNITS] as const;
+
+function isMassFlowUnit(unit: (typeof FLOW_UNITS)[number]): unit is MassFlowUnit {
+  return (MASS_FLOW_UNITS as readonly string[]).includes(unit);
+}
 
 const bodySchema = z
   .object({
-    flow: positiveQuantity("flow.value", flowUnitSchema),
-    dP: positiveQuantity("dP.value", pressureUnitSchema),
+    flow: quantity("fuel flow", FLOW_UNITS),
+    dP: quantity("pressure difference (dP)", PRESSURE_UNITS),
     cd: positiveNumber("cd").refine((v) => v <= 1, { error: "cd must not exceed 1" }),
     fuel: fuelSchema.optional(),
     densityKgM3: fuelDensity("densityKgM3").optional(),

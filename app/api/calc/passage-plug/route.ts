@@ -2,20 +2,20 @@ import { z } from "zod";
 import { calculatorRoute } from "@/lib/http/api-route";
 import { ALL_THREADS } from "@/lib/engineering/threads";
 import { toSI } from "@/lib/engineering/units";
-import { formQuantity } from "@/lib/forms/form-schema";
-import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
-import { drillList, threadList } from "@/lib/forms/quantity-schema";
+import { quantity } from "@/lib/forms/quantity/quantity";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/quantity/units";
+import { drillList, threadList } from "@/lib/forms/trade-fields";
 import { planPassagePlug } from "@/app/(office)/reference/calculators/tap-drill/compute";
 import { engagementSchema } from "@/app/(office)/reference/calculators/tap-drill/schema";
 
 const zeroOrMore = { min: 0, minInclusive: true } as const;
 
 const bodySchema = z.object({
-  passageDiameter: formQuantity("passage diameter", FORM_LENGTH_UNITS),
-  wall: formQuantity("wall thickness", FORM_LENGTH_UNITS, zeroOrMore),
-  depth: formQuantity("depth available", FORM_LENGTH_UNITS),
+  passageDiameter: quantity("passage diameter", FORM_LENGTH_UNITS),
+  wall: quantity("wall thickness", FORM_LENGTH_UNITS, zeroOrMore),
+  depth: quantity("depth available", FORM_LENGTH_UNITS),
   engagement: engagementSchema.optional(),
-  minWall: formQuantity("least wall to keep", FORM_LENGTH_UNITS, zeroOrMore).optional(),
+  minWall: quantity("least wall to keep", FORM_LENGTH_UNITS, zeroOrMore).optional(),
   threads: threadList("threads").optional(),
   drills: drillList("drills").optional(),
 });

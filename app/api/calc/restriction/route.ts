@@ -5,7 +5,8 @@ import { ALL_DRILLS } from "@/lib/engineering/drills";
 import { MAX_HOLES_PER_CHANNEL, solveHoleLayout } from "@/lib/engineering/hole-layout";
 import { DEFAULT_RESTRICTION_DRILL_LIMITS } from "@/lib/engineering/restriction-limits";
 import { toSI } from "@/lib/engineering/units";
-import { drillList, nonNegativeNumber, positiveNumber } from "@/lib/forms/quantity-schema";
+import { nonNegativeNumber, positiveNumber } from "@/lib/forms/quantity/figures";
+import { drillList } from "@/lib/forms/trade-fields";
 
 const bodySchema = z
   .object({

@@ -1,6 +1,6 @@
 "use client";
 
-import { useActionState } from "react";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button } from "@/components/ui/button";
 import type { FormResult } from "@/lib/forms/form-action";
 
@@ -18,10 +18,10 @@ export function UseLayoutButton({
   drillLabel: string;
   layout: string;
 }) {
-  const [result, formAction, pending] = useActionState(action, undefined);
+  const { formProps, lastResult: result, pending } = useServerForm(action, { id: `use-layout-${stageId}-${count}-${drillLabel}` });
   const refused = result && result.httpStatus !== 200 ? (result.error?.[""] ?? ["Not saved."]) : undefined;
   return (
-    <form action={formAction} className="inline-flex flex-col items-end gap-1">
+    <form {...formProps} className="inline-flex flex-col items-end gap-1">
       <input type="hidden" name="stageId" value={stageId} />
       <input type="hidden" name="count" value={count} />
       <input type="hidden" name="drillLabel" value={drillLabel} />

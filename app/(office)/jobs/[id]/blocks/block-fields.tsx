@@ -7,7 +7,7 @@ import { QuantityField } from "@/components/forms/quantity-field";
 import { SelectField } from "@/components/forms/select-field";
 import { Button } from "@/components/ui/button";
 import { FieldErrors } from "@/components/ui/field";
-import { FORM_LENGTH_UNITS, type FormLengthUnit } from "@/lib/forms/units";
+import { FORM_LENGTH_UNITS, type FormLengthUnit } from "@/lib/forms/quantity/units";
 import { newStage, SIDE_OPTIONS, type BlockForm, type BlocksForm } from "./form-shape";
 import { StageFields } from "./stage-fields";
 

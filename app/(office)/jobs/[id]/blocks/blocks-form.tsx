@@ -1,14 +1,12 @@
 "use client";
 
-import { getFormProps, useForm } from "@conform-to/react";
-import { useActionState } from "react";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { FieldErrors, FormMessage } from "@/components/ui/field";
 import type { FormResult } from "@/lib/forms/form-action";
-import type { FormLengthUnit } from "@/lib/forms/units";
+import type { FormLengthUnit } from "@/lib/forms/quantity/units";
 import { BlockFields } from "./block-fields";
 import { newBlock, type BlocksForm } from "./form-shape";
-import { submitInPlace } from "./submit-in-place";
 
 /**
  * The primary and (optionally) secondary block of one job with their stages. Checked on the server, all or
@@ -25,10 +23,8 @@ export function BlocksEditor({
   unit: FormLengthUnit;
   cancelHref: string;
 }) {
-  const [lastResult, formAction, pending] = useActionState(action, undefined);
-  const [form, fields] = useForm<BlocksForm>({
+  const { form, fields, formProps, lastResult, pending } = useServerForm(action, {
     id: "job-blocks",
-    lastResult,
     defaultValue,
     shouldValidate: "onSubmit",
     shouldRevalidate: "onSubmit",
@@ -38,9 +34,7 @@ export function BlocksEditor({
   const missing = sides.includes("secondary") ? "primary" : "secondary";
   return (
     <form
-      {...getFormProps(form)}
-      action={formAction}
-      onSubmit={(event) => submitInPlace(event, form.onSubmit, formAction)}
+      {...formProps}
       aria-label="Metering blocks"
       className="flex flex-col gap-6"
       noValidate

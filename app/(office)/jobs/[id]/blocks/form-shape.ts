@@ -1,4 +1,4 @@
-import type { FormAreaUnit, FormLengthUnit } from "@/lib/forms/units";
+import type { FormAreaUnit, FormLengthUnit } from "@/lib/forms/quantity/units";
 
 // The blocks form as the browser holds it (Conform's view of jobBlocksSchema): up to two blocks, each with
 // its list of enrichment stages. Types and option lists only, safe in the client bundle.

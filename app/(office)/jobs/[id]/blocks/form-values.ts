@@ -1,7 +1,7 @@
 import "server-only";
 import type { BlockRow, StageRow } from "@/db/jobs";
 import { fromSI } from "@/lib/engineering/units";
-import { areaUnitFor, type FormLengthUnit } from "@/lib/forms/units";
+import { areaUnitFor, type FormLengthUnit } from "@/lib/forms/quantity/units";
 import { typed } from "../edit/form-values";
 import { newBlock, type BlockForm, type BlocksForm, type StageForm } from "./form-shape";
 

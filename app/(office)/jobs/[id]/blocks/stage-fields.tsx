@@ -6,7 +6,7 @@ import { NumberField } from "@/components/forms/number-field";
 import { QuantityField } from "@/components/forms/quantity-field";
 import { SelectField } from "@/components/forms/select-field";
 import { Button } from "@/components/ui/button";
-import { FORM_AREA_UNITS } from "@/lib/forms/units";
+import { FORM_AREA_UNITS } from "@/lib/forms/quantity/units";
 import { MODE_OPTIONS, SETPOINT_UNITS, TARGET_OPTIONS, VACUUM_UNITS, VALVE_OPTIONS, type BlocksForm, type StageForm } from "./form-shape";
 
 /** One enrichment stage: the valve, when it opens, how much it must add, and the most holes allowed. */

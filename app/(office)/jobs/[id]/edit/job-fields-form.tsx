@@ -1,11 +1,11 @@
 "use client";
 
-import { getFormProps, getInputProps, getTextareaProps, useForm } from "@conform-to/react";
+import { getInputProps, getTextareaProps } from "@conform-to/react";
 import { FieldGroup } from "@/components/forms/calculator-form";
 import { NumberField } from "@/components/forms/number-field";
 import { QuantityField } from "@/components/forms/quantity-field";
 import { SelectField } from "@/components/forms/select-field";
-import { useCalculatorAction } from "@/components/forms/use-calculator-action";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { Field, FormMessage, Input, Textarea } from "@/components/ui/field";
 import type { FormResult } from "@/lib/forms/form-action";
@@ -23,19 +23,15 @@ export function JobFieldsEditor({
   defaultValue: JobFieldsForm;
   cancelHref: string;
 }) {
-  // Run in a transition, so React does not reset the boxes when the server sends errors back.
-  const { lastResult, action: formAction, pending, onSubmit } = useCalculatorAction(action);
-  const [form, fields] = useForm<JobFieldsForm>({
+  const { form, fields, formProps, pending } = useServerForm(action, {
     id: "job-fields",
-    lastResult,
-    onSubmit,
     defaultValue,
     shouldValidate: "onSubmit",
     shouldRevalidate: "onSubmit",
   });
   const fuel = fields.fuelKind.value ?? defaultValue.fuelKind;
   return (
-    <form {...getFormProps(form)} action={formAction} aria-label="Engine and fuel" className="flex flex-col gap-6" noValidate>
+    <form {...formProps} aria-label="Engine and fuel" className="flex flex-col gap-6" noValidate>
       <FormMessage errors={form.errors} />
       <FieldGroup title="Carburetor and engine" columns={3}>
         <Field label="Carburetor" htmlFor={fields.carburetor.id} errors={fields.carburetor.errors} errorId={fields.carburetor.errorId}>

@@ -1,24 +1,21 @@
 "use client";
 
-import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { CalculatorMessage, FieldGroup } from "@/components/forms/calculator-form";
 import { NumberField } from "@/components/forms/number-field";
 import { QuantityField } from "@/components/forms/quantity-field";
 import { ResultPending } from "@/components/forms/readings";
-import { useCalculatorAction } from "@/components/forms/use-calculator-action";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button } from "@/components/ui/button";
 import type { DisplayLengthUnit } from "@/lib/format/display";
-import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/quantity/units";
 import { grindPlanAction } from "./actions";
 import { GrindResults } from "./grind-results";
 import { grindSchema } from "./schema";
 
 export function GrindForm({ unit }: { unit: DisplayLengthUnit }) {
-  const { lastResult, action, pending, onSubmit, data: result } = useCalculatorAction(grindPlanAction);
-  const [form, fields] = useForm({
+  const { form, fields, formProps, pending, data: result } = useServerForm(grindPlanAction, {
     id: "grind",
-    lastResult,
     defaultValue: {
       protrusion: { unit },
       clearance: { unit },
@@ -30,12 +27,11 @@ export function GrindForm({ unit }: { unit: DisplayLengthUnit }) {
     },
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onSubmit,
     onValidate: ({ formData }) => parseWithZod(formData, { schema: grindSchema }),
   });
   return (
     <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,30rem)_1fr]">
-      <form {...getFormProps(form)} action={action} aria-label="Clearance grind" className="flex flex-col gap-5" noValidate>
+      <form {...formProps} aria-label="Clearance grind" className="flex flex-col gap-5" noValidate>
         <CalculatorMessage errors={form.errors} />
         <FieldGroup title="Measured" columns={2}>
           <QuantityField label="Valve protrusion" field={fields.protrusion} units={FORM_LENGTH_UNITS} hint="How far the valve stands into the boss." />

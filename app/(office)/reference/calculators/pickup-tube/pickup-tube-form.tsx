@@ -1,15 +1,14 @@
 "use client";
 
-import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { CalculatorMessage, FieldGroup } from "@/components/forms/calculator-form";
 import { NumberField } from "@/components/forms/number-field";
 import { QuantityField } from "@/components/forms/quantity-field";
 import { Reading, Readings, ResultPanel, ResultPending } from "@/components/forms/readings";
-import { useCalculatorAction } from "@/components/forms/use-calculator-action";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button } from "@/components/ui/button";
 import { formatLength, type DisplayLengthUnit } from "@/lib/format/display";
-import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/quantity/units";
 import { pickupTubeAction } from "./actions";
 import { pickupTubeSchema } from "./schema";
 
@@ -17,10 +16,8 @@ import { pickupTubeSchema } from "./schema";
 const COMMON_TUBE_OD = { in: 0.3125, mm: 7.94 } as const;
 
 export function PickupTubeForm({ unit }: { unit: DisplayLengthUnit }) {
-  const { lastResult, action, pending, onSubmit, data: result } = useCalculatorAction(pickupTubeAction);
-  const [form, fields] = useForm({
+  const { form, fields, formProps, pending, data: result } = useServerForm(pickupTubeAction, {
     id: "pickup-tube",
-    lastResult,
     defaultValue: {
       firstRun: { unit },
       bendAngle: 90,
@@ -34,12 +31,11 @@ export function PickupTubeForm({ unit }: { unit: DisplayLengthUnit }) {
     },
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onSubmit,
     onValidate: ({ formData }) => parseWithZod(formData, { schema: pickupTubeSchema }),
   });
   return (
     <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,30rem)_1fr]">
-      <form {...getFormProps(form)} action={action} aria-label="Pickup tube" className="flex flex-col gap-5" noValidate>
+      <form {...formProps} aria-label="Pickup tube" className="flex flex-col gap-5" noValidate>
         <CalculatorMessage errors={form.errors} />
         <FieldGroup title="Path along the centerline" columns={2}>
           <QuantityField label="First run" field={fields.firstRun} units={FORM_LENGTH_UNITS} hint="Straight, rearward from the inlet tip." />

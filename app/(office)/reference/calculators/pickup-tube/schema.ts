@@ -1,6 +1,7 @@
 import { z } from "zod";
-import { formNumber, formQuantity, optionalFormQuantity } from "@/lib/forms/form-schema";
-import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
+import { formNumber } from "@/lib/forms/quantity/figures";
+import { quantity, optionalQuantity } from "@/lib/forms/quantity/quantity";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/quantity/units";
 
 const zeroOrMore = { min: 0, minInclusive: true } as const;
 const angle = (label: string) => formNumber(label, { min: -180, minInclusive: true, max: 180 });
@@ -11,16 +12,16 @@ const angle = (label: string) => formNumber(label, { min: -180, minInclusive: tr
  */
 export const pickupTubeSchema = z
   .object({
-    firstRun: formQuantity("first run", FORM_LENGTH_UNITS, zeroOrMore),
+    firstRun: quantity("first run", FORM_LENGTH_UNITS, zeroOrMore),
     bendAngle: angle("bend angle"),
-    radius: formQuantity("centerline radius", FORM_LENGTH_UNITS),
-    secondRun: formQuantity("second run", FORM_LENGTH_UNITS, zeroOrMore),
+    radius: quantity("centerline radius", FORM_LENGTH_UNITS),
+    secondRun: quantity("second run", FORM_LENGTH_UNITS, zeroOrMore),
     secondBendAngle: angle("second bend angle").optional(),
-    thirdRun: optionalFormQuantity("third run", FORM_LENGTH_UNITS, zeroOrMore),
-    swage: formQuantity("swage engagement", FORM_LENGTH_UNITS, zeroOrMore),
-    outsideDiameter: formQuantity("tube outside diameter", FORM_LENGTH_UNITS),
-    maxRearward: optionalFormQuantity("room rearward", FORM_LENGTH_UNITS),
-    maxDownward: optionalFormQuantity("room downward", FORM_LENGTH_UNITS),
+    thirdRun: optionalQuantity("third run", FORM_LENGTH_UNITS, zeroOrMore),
+    swage: quantity("swage engagement", FORM_LENGTH_UNITS, zeroOrMore),
+    outsideDiameter: quantity("tube outside diameter", FORM_LENGTH_UNITS),
+    maxRearward: optionalQuantity("room rearward", FORM_LENGTH_UNITS),
+    maxDownward: optionalQuantity("room downward", FORM_LENGTH_UNITS),
   })
   .superRefine((v, ctx) => {
     if (v.secondBendAngle === undefined && v.thirdRun !== undefined) {

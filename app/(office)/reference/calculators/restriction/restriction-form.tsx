@@ -1,16 +1,15 @@
 "use client";
 
-import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { CalculatorMessage, FieldGroup } from "@/components/forms/calculator-form";
 import { NumberField } from "@/components/forms/number-field";
 import { QuantityField } from "@/components/forms/quantity-field";
 import { ResultPending } from "@/components/forms/readings";
 import { SelectField } from "@/components/forms/select-field";
-import { useCalculatorAction } from "@/components/forms/use-calculator-action";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button } from "@/components/ui/button";
 import type { DisplayLengthUnit } from "@/lib/format/display";
-import { areaUnitFor, FORM_AREA_UNITS, FORM_LENGTH_UNITS } from "@/lib/forms/units";
+import { areaUnitFor, FORM_AREA_UNITS, FORM_LENGTH_UNITS } from "@/lib/forms/quantity/units";
 import { restrictionAction } from "./actions";
 import { RestrictionResults } from "./restriction-results";
 import { restrictionSchema } from "./schema";
@@ -30,10 +29,8 @@ const DRILL_OPTIONS = [
 ] as const;
 
 export function RestrictionForm({ unit }: { unit: DisplayLengthUnit }) {
-  const { lastResult, action, pending, onSubmit, data: result } = useCalculatorAction(restrictionAction);
-  const [form, fields] = useForm({
+  const { form, fields, formProps, pending, data: result } = useServerForm(restrictionAction, {
     id: "restriction",
-    lastResult,
     defaultValue: {
       targetKind: "area",
       targetArea: { unit: areaUnitFor(unit) },
@@ -46,13 +43,12 @@ export function RestrictionForm({ unit }: { unit: DisplayLengthUnit }) {
     },
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onSubmit,
     onValidate: ({ formData }) => parseWithZod(formData, { schema: restrictionSchema }),
   });
   const kind = fields.targetKind.value ?? "area";
   return (
     <div className="flex flex-col gap-6">
-      <form {...getFormProps(form)} action={action} aria-label="Restriction holes" className="flex flex-col gap-5" noValidate>
+      <form {...formProps} aria-label="Restriction holes" className="flex flex-col gap-5" noValidate>
         <CalculatorMessage errors={form.errors} />
         <FieldGroup title="Target" columns={4}>
           <SelectField label="Target given as" field={fields.targetKind} options={TARGET_OPTIONS} />

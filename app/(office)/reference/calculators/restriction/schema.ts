@@ -1,6 +1,7 @@
 import { z } from "zod";
-import { formNumber, formWholeNumber, optionalFormQuantity } from "@/lib/forms/form-schema";
-import { FORM_AREA_UNITS, FORM_LENGTH_UNITS } from "@/lib/forms/units";
+import { formNumber, formWholeNumber } from "@/lib/forms/quantity/figures";
+import { optionalQuantity } from "@/lib/forms/quantity/quantity";
+import { FORM_AREA_UNITS, FORM_LENGTH_UNITS } from "@/lib/forms/quantity/units";
 
 export const TARGET_KINDS = ["area", "afr", "percent"] as const;
 export const DRILL_SETS = ["inch", "number", "fraction", "metric", "all"] as const;
@@ -12,17 +13,17 @@ export const DRILL_SETS = ["inch", "number", "fraction", "metric", "all"] as con
 export const restrictionSchema = z
   .object({
     targetKind: z.enum(TARGET_KINDS, { error: "Choose how the target is given." }),
-    targetArea: optionalFormQuantity("target area", FORM_AREA_UNITS),
+    targetArea: optionalQuantity("target area", FORM_AREA_UNITS),
     afrBefore: formNumber("AFR before", { min: 0, max: 30 }).optional(),
     afrAfter: formNumber("AFR wanted", { min: 0, max: 30 }).optional(),
     percent: formNumber("enrichment", { min: 0, max: 200 }).optional(),
-    mainJet: optionalFormQuantity("main-jet bore", FORM_LENGTH_UNITS),
+    mainJet: optionalQuantity("main-jet bore", FORM_LENGTH_UNITS),
     mainJetCount: formWholeNumber("number of main jets", 1, 8).optional(),
     maxHoles: formWholeNumber("most holes", 1, 4),
     drillSet: z.enum(DRILL_SETS, { error: "Choose the drills to pick from." }),
-    valveWindow: optionalFormQuantity("valve window area", FORM_AREA_UNITS),
-    channelLength: optionalFormQuantity("channel length", FORM_LENGTH_UNITS),
-    minWeb: optionalFormQuantity("least web", FORM_LENGTH_UNITS, { min: 0, minInclusive: true }),
+    valveWindow: optionalQuantity("valve window area", FORM_AREA_UNITS),
+    channelLength: optionalQuantity("channel length", FORM_LENGTH_UNITS),
+    minWeb: optionalQuantity("least web", FORM_LENGTH_UNITS, { min: 0, minInclusive: true }),
   })
   .superRefine((v, ctx) => {
     const need = (ok: boolean, path: (string | number)[], message: string) => {

@@ -1,6 +1,7 @@
 import { z } from "zod";
-import { formNumber, formQuantity, formWholeNumber, optionalFormQuantity } from "@/lib/forms/form-schema";
-import { FORM_AREA_UNITS, FORM_BOOST_UNITS, FORM_LENGTH_UNITS, FORM_OPENING_UNITS, FORM_TEMPERATURE_UNITS } from "@/lib/forms/units";
+import { formNumber, formWholeNumber } from "@/lib/forms/quantity/figures";
+import { quantity, optionalQuantity } from "@/lib/forms/quantity/quantity";
+import { FORM_AREA_UNITS, FORM_BOOST_UNITS, FORM_LENGTH_UNITS, FORM_OPENING_UNITS, FORM_TEMPERATURE_UNITS } from "@/lib/forms/quantity/units";
 
 export const STAGING_COMMANDS = ["chart", "propose"] as const;
 export const STAGING_FUELS = ["gasoline", "E10", "E30", "E85", "ethanol", "methanol"] as const;
@@ -14,8 +15,8 @@ const zeroOrMore = { min: 0, minInclusive: true } as const;
 const valveSchema = z.object({
   kind: z.enum(VALVE_KINDS, { error: "Choose vacuum or boost." }),
   side: z.enum(SIDES, { error: "Choose primary or secondary." }),
-  opening: formQuantity("opening point", FORM_OPENING_UNITS, zeroOrMore),
-  area: formQuantity("restriction area", FORM_AREA_UNITS, zeroOrMore),
+  opening: quantity("opening point", FORM_OPENING_UNITS, zeroOrMore),
+  area: quantity("restriction area", FORM_AREA_UNITS, zeroOrMore),
 });
 
 /**
@@ -27,9 +28,9 @@ const valveSchema = z.object({
 export const stagingSchema = z
   .object({
     command: z.enum(STAGING_COMMANDS).default("chart"),
-    primaryJet: formQuantity("primary main-jet bore", FORM_LENGTH_UNITS),
+    primaryJet: quantity("primary main-jet bore", FORM_LENGTH_UNITS),
     primaryJets: formWholeNumber("number of primary main jets", 1, 8),
-    secondaryJet: formQuantity("secondary main-jet bore", FORM_LENGTH_UNITS),
+    secondaryJet: quantity("secondary main-jet bore", FORM_LENGTH_UNITS),
     secondaryJets: formWholeNumber("number of secondary main jets", 1, 8),
     valves: z.array(valveSchema).max(MAX_VALVES, { error: `At most ${MAX_VALVES} power valves.` }).default([]),
     fuel: z.enum(STAGING_FUELS, { error: "Choose the fuel." }),
@@ -37,12 +38,12 @@ export const stagingSchema = z
     targetAtmosphere: formNumber("target without boost", { min: 0, max: 30 }),
     targetPeak: formNumber("target at peak boost", { min: 0, max: 30 }),
     targetCruise: formNumber("target at cruise", { min: 0, max: 30 }).optional(),
-    peakBoost: formQuantity("peak boost", FORM_BOOST_UNITS),
-    ambientTemperature: formQuantity("ambient temperature", FORM_TEMPERATURE_UNITS, { min: -60, minInclusive: true, max: 160 }),
-    chargeTemperature: formQuantity("charge temperature at peak boost", FORM_TEMPERATURE_UNITS, { min: -60, minInclusive: true, max: 400 }),
+    peakBoost: quantity("peak boost", FORM_BOOST_UNITS),
+    ambientTemperature: quantity("ambient temperature", FORM_TEMPERATURE_UNITS, { min: -60, minInclusive: true, max: 160 }),
+    chargeTemperature: quantity("charge temperature at peak boost", FORM_TEMPERATURE_UNITS, { min: -60, minInclusive: true, max: 400 }),
     band: formNumber("accepted band", { min: 0, max: 50 }),
     proposeValves: formWholeNumber("boost valves to propose", 1, 6),
-    boostWindow: optionalFormQuantity("boost-valve window area", FORM_AREA_UNITS),
+    boostWindow: optionalQuantity("boost-valve window area", FORM_AREA_UNITS),
   })
   .superRefine((v, ctx) => {
     const targets = [

@@ -1,16 +1,15 @@
 "use client";
 
-import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { CalculatorMessage, FieldGroup } from "@/components/forms/calculator-form";
 import { NumberField } from "@/components/forms/number-field";
 import { QuantityField } from "@/components/forms/quantity-field";
 import { ResultPending } from "@/components/forms/readings";
 import { SelectField } from "@/components/forms/select-field";
-import { useCalculatorAction } from "@/components/forms/use-calculator-action";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button } from "@/components/ui/button";
 import type { DisplayLengthUnit } from "@/lib/format/display";
-import { areaUnitFor, FORM_AREA_UNITS, FORM_BOOST_UNITS, FORM_LENGTH_UNITS, FORM_TEMPERATURE_UNITS } from "@/lib/forms/units";
+import { areaUnitFor, FORM_AREA_UNITS, FORM_BOOST_UNITS, FORM_LENGTH_UNITS, FORM_TEMPERATURE_UNITS } from "@/lib/forms/quantity/units";
 import { stagingAction } from "./actions";
 import { stagingSchema } from "./schema";
 import { StagingResults } from "./staging-results";
@@ -31,11 +30,9 @@ const SCALE_OPTIONS = [
 ] as const;
 
 export function StagingForm({ unit }: { unit: DisplayLengthUnit }) {
-  const { lastResult, action, pending, onSubmit, data: result } = useCalculatorAction(stagingAction);
   const areaUnit = areaUnitFor(unit);
-  const [form, fields] = useForm({
+  const { form, fields, formProps, pending, data: result } = useServerForm(stagingAction, {
     id: "staging",
-    lastResult,
     defaultValue: {
       primaryJet: { unit },
       primaryJets: 2,
@@ -57,12 +54,11 @@ export function StagingForm({ unit }: { unit: DisplayLengthUnit }) {
     },
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onSubmit,
     onValidate: ({ formData }) => parseWithZod(formData, { schema: stagingSchema }),
   });
   return (
     <div className="flex flex-col gap-6">
-      <form {...getFormProps(form)} action={action} aria-label="Staging" className="flex flex-col gap-6" noValidate>
+      <form {...formProps} aria-label="Staging" className="flex flex-col gap-6" noValidate>
         <CalculatorMessage errors={form.errors} />
         <FieldGroup title="Main jets, measured" columns={4}>
           <QuantityField label="Primary jet bore" field={fields.primaryJet} units={FORM_LENGTH_UNITS} />

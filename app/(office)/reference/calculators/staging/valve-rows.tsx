@@ -5,7 +5,7 @@ import { QuantityField } from "@/components/forms/quantity-field";
 import { SelectField } from "@/components/forms/select-field";
 import { Button } from "@/components/ui/button";
 import { FieldErrors } from "@/components/ui/field";
-import { FORM_AREA_UNITS, FORM_OPENING_UNITS } from "@/lib/forms/units";
+import { FORM_AREA_UNITS, FORM_OPENING_UNITS } from "@/lib/forms/quantity/units";
 import { MAX_VALVES, type StagingInput } from "./schema";
 
 type ValveFields = FieldMetadata<StagingInput["valves"], Record<string, unknown>, string[]>;

@@ -1,17 +1,16 @@
 "use client";
 
-import { getFormProps, useForm } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { CalculatorMessage, FieldGroup } from "@/components/forms/calculator-form";
 import { NumberField } from "@/components/forms/number-field";
 import { QuantityField } from "@/components/forms/quantity-field";
 import { SelectField } from "@/components/forms/select-field";
 import { Reading, Readings, ResultPanel, ResultPending, ResultWarnings } from "@/components/forms/readings";
-import { useCalculatorAction } from "@/components/forms/use-calculator-action";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button } from "@/components/ui/button";
 import { Tag } from "@/components/ui/sheet";
 import { drillSize, fixed, formatLength, type DisplayLengthUnit } from "@/lib/format/display";
-import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/quantity/units";
 import { passagePlugAction } from "./actions";
 import { passagePlugSchema } from "./schema";
 
@@ -22,10 +21,8 @@ const THREAD_OPTIONS = [
 ] as const;
 
 export function PassagePlugForm({ unit }: { unit: DisplayLengthUnit }) {
-  const { lastResult, action, pending, onSubmit, data: result } = useCalculatorAction(passagePlugAction);
-  const [form, fields] = useForm({
+  const { form, fields, formProps, pending, data: result } = useServerForm(passagePlugAction, {
     id: "passage-plug",
-    lastResult,
     defaultValue: {
       passage: { unit },
       wall: { unit },
@@ -36,12 +33,11 @@ export function PassagePlugForm({ unit }: { unit: DisplayLengthUnit }) {
     },
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onSubmit,
     onValidate: ({ formData }) => parseWithZod(formData, { schema: passagePlugSchema }),
   });
   return (
     <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,30rem)_1fr]">
-      <form {...getFormProps(form)} action={action} aria-label="Passage plug" className="flex flex-col gap-4" noValidate>
+      <form {...formProps} aria-label="Passage plug" className="flex flex-col gap-4" noValidate>
         <CalculatorMessage errors={form.errors} />
         <FieldGroup columns={2}>
           <QuantityField label="Passage diameter" field={fields.passage} units={FORM_LENGTH_UNITS} hint="Measured with pin gauges." />

@@ -1,7 +1,8 @@
 import { z } from "zod";
 import { MAX_TAP_ENGAGEMENT_PCT, parseThread } from "@/lib/engineering/threads";
-import { formNumber, formQuantity, optionalFormQuantity } from "@/lib/forms/form-schema";
-import { FORM_LENGTH_UNITS } from "@/lib/forms/units";
+import { formNumber } from "@/lib/forms/quantity/figures";
+import { quantity, optionalQuantity } from "@/lib/forms/quantity/quantity";
+import { FORM_LENGTH_UNITS } from "@/lib/forms/quantity/units";
 
 /** Up to the basic minor diameter's 83.3 %: a smaller drill leaves metal under the thread's root (ASME B1.1). */
 export const engagementSchema = formNumber("thread engagement", { min: 0 }).max(MAX_TAP_ENGAGEMENT_PCT + 1e-9, {
@@ -25,11 +26,11 @@ export const PLUG_THREAD_SYSTEMS = ["unified", "metric", "both"] as const;
 /** The plug for a measured passage. */
 export const passagePlugSchema = z.object({
   threadSystem: z.enum(PLUG_THREAD_SYSTEMS, { error: "Choose the threads the shop taps." }),
-  passage: formQuantity("passage diameter", FORM_LENGTH_UNITS),
-  wall: formQuantity("wall thickness", FORM_LENGTH_UNITS, { min: 0, minInclusive: true }),
-  depth: formQuantity("depth available", FORM_LENGTH_UNITS),
+  passage: quantity("passage diameter", FORM_LENGTH_UNITS),
+  wall: quantity("wall thickness", FORM_LENGTH_UNITS, { min: 0, minInclusive: true }),
+  depth: quantity("depth available", FORM_LENGTH_UNITS),
   engagement: engagementSchema,
-  minWall: optionalFormQuantity("least wall to keep", FORM_LENGTH_UNITS, { min: 0, minInclusive: true }),
+  minWall: optionalQuantity("least wall to keep", FORM_LENGTH_UNITS, { min: 0, minInclusive: true }),
 });
 
 export type TapDrillInput = z.output<typeof tapDrillSchema>;

@@ -1,11 +1,11 @@
 "use client";
 
-import { getFormProps, getInputProps, useForm } from "@conform-to/react";
+import { getInputProps } from "@conform-to/react";
 import { parseWithZod } from "@conform-to/zod/v4";
 import { CalculatorMessage } from "@/components/forms/calculator-form";
 import { NumberField } from "@/components/forms/number-field";
 import { Reading, Readings, ResultPanel, ResultPending } from "@/components/forms/readings";
-import { useCalculatorAction } from "@/components/forms/use-calculator-action";
+import { useServerForm } from "@/components/forms/use-server-form";
 import { Button } from "@/components/ui/button";
 import { Field, Input } from "@/components/ui/field";
 import { drillSize, fixed, formatLength, type DisplayLengthUnit } from "@/lib/format/display";
@@ -14,19 +14,16 @@ import { tapDrillAction } from "./actions";
 import { tapDrillSchema } from "./schema";
 
 export function TapDrillForm({ unit }: { unit: DisplayLengthUnit }) {
-  const { lastResult, action, pending, onSubmit, data: result } = useCalculatorAction(tapDrillAction);
-  const [form, fields] = useForm({
+  const { form, fields, formProps, pending, data: result } = useServerForm(tapDrillAction, {
     id: "tap-drill",
-    lastResult,
     defaultValue: { engagement: 75 },
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
-    onSubmit,
     onValidate: ({ formData }) => parseWithZod(formData, { schema: tapDrillSchema }),
   });
   return (
     <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,30rem)_1fr]">
-      <form {...getFormProps(form)} action={action} aria-label="Tap drill" className="flex flex-col gap-4" noValidate>
+      <form {...formProps} aria-label="Tap drill" className="flex flex-col gap-4" noValidate>
         <CalculatorMessage errors={form.errors} />
         <Field label="Thread" htmlFor={fields.thread.id} errors={fields.thread.errors} errorId={fields.thread.errorId} hint="4-40, #10-32, 1/4-20 UNC, M3x0.5, M8x1">
           <Input {...getInputProps(fields.thread, { type: "text" })} key={fields.thread.key} list="thread-labels" autoComplete="off" className="numeric" />

@@ -1,60 +1,11 @@
 import { z } from "zod";
 import { drillLabelProblem, findDrill } from "@/lib/engineering/drills";
-import { LARGEST_FIGURE, SMALLEST_FIGURE } from "@/lib/forms/form-schema";
 import type { FuelSpec } from "@/lib/engineering/fuels";
 import { parseThread, type Thread } from "@/lib/engineering/threads";
 import type { Drill } from "@/lib/engineering/types";
-import {
-  AREA_UNITS,
-  LENGTH_UNITS,
-  MASS_FLOW_UNITS,
-  PRESSURE_UNITS,
-  TEMPERATURE_UNITS,
-  VOLUME_FLOW_UNITS,
-} from "@/lib/engineering/units";
+import { fuelDensity, positiveNumber } from "@/lib/forms/quantity/figures";
 
-// zod pieces for inputs that carry their unit, shared by the JSON API and the forms.
-
-const finite = (field: string) =>
-  z
-    .number({ error: `${field} must be a number` })
-    .refine(Number.isFinite, { error: `${field} must be a finite number` })
-    .refine((v) => Math.abs(v) <= LARGEST_FIGURE, { error: `${field} is far larger than any carburetor job needs: check the number` })
-    .refine((v) => v === 0 || Math.abs(v) >= SMALLEST_FIGURE, { error: `${field} is too small to be a measured figure: check the number` });
-
-/** Liquid fuels from gasoline (about 745 kg/m³) to methanol (about 792) and beyond sit well inside 500-1500 kg/m³. */
-export const FUEL_DENSITY_RANGE_KG_M3 = { min: 500, max: 1500 } as const;
-
-/** A fuel density in kg/m³; a figure typed in g/cm³ (0.745) is refused with the conversion. */
-export const fuelDensity = (field: string) =>
-  finite(field).superRefine((v, ctx) => {
-    const { min, max } = FUEL_DENSITY_RANGE_KG_M3;
-    if (v >= min && v <= max) return;
-    const hint = v > 0.5 && v < 1.5 ? `: ${v} looks like g/cm³, which is ${Number((v * 1000).toFixed(3))} kg/m³` : "";
-    ctx.addIssue({ code: "custom", message: `${field} must be between ${min} and ${max} kg/m³${hint}` });
-  });
-
-export const positiveNumber = (field: string) => finite(field).refine((v) => v > 0, { error: `${field} must be greater than 0` });
-export const nonNegativeNumber = (field: string) => finite(field).refine((v) => v >= 0, { error: `${field} must be 0 or more` });
-
-function unitEnum<T extends readonly [string, ...string[]]>(units: T, what: string) {
-  return z.enum(units, { error: `unit must be one of ${units.join(", ")} (${what})` });
-}
-
-export const lengthUnitSchema = unitEnum(LENGTH_UNITS, "length");
-export const areaUnitSchema = unitEnum(AREA_UNITS, "area");
-export const pressureUnitSchema = unitEnum(PRESSURE_UNITS, "pressure");
-export const temperatureUnitSchema = unitEnum(TEMPERATURE_UNITS, "temperature");
-
-export const FLOW_UNITS = [...MASS_FLOW_UNITS, ...VOLUME_FLOW_UNITS] as const;
-export const flowUnitSchema = unitEnum(FLOW_UNITS, "fuel mass or volume flow");
-
-export function isMassFlowUnit(unit: (typeof FLOW_UNITS)[number]): unit is (typeof MASS_FLOW_UNITS)[number] {
-  return (MASS_FLOW_UNITS as readonly string[]).includes(unit);
-}
-
-export const positiveQuantity = <U extends z.ZodType>(field: string, unit: U) =>
-  z.object({ value: positiveNumber(field), unit }, { error: `${field} must be { value, unit }` });
+// JSON API fields that name trade items in words: a fuel, a list of drills, a list of threads.
 
 /** A fuel by name ("gasoline", "ethanol", "methanol", "E85", "E30") or described in full. */
 export const fuelSchema = z.union(
