@@ -16,3 +16,15 @@ export const signOffSchema = z.object({
   readings: z.array(reading).max(8).default([]),
 });
 export type SignOffInput = z.output<typeof signOffSchema>;
+
+/** A correction of a signed operation's readings: the readings as they should have been, and why. */
+export const amendSignOffSchema = z.object({
+  operationId: z.uuid({ error: "operationId must be an operation's id." }),
+  reason: z
+    .string({ error: "Say why the reading is corrected." })
+    .trim()
+    .min(3, { error: "Say why the reading is corrected." })
+    .max(500, { error: "Keep the reason under 500 characters." }),
+  readings: z.array(reading, { error: "readings must be a list of { key, value, unit }." }).min(1, { error: "Give the corrected reading." }).max(8),
+});
+export type AmendSignOffInput = z.output<typeof amendSignOffSchema>;
