@@ -19,8 +19,10 @@ export interface BenchOperation {
   parameters: Record<string, string | number>;
   caution: string | null;
   planned: PlannedMeasurement[];
-  signOff: { by: string; at: string; note: string } | null;
+  signOff: { by: string; byId: string; at: string; note: string } | null;
   recorded: { key: string; valueSi: number; passed: boolean }[];
+  /** Readings corrected after signing, oldest first: what was recorded before, what replaced it, and why. */
+  amendments: { key: string; previousValueSi: number; valueSi: number; passed: boolean; reason: string; by: string; at: string }[];
 }
 
 export interface BenchView {
@@ -70,7 +72,7 @@ export async function getBenchView(viewer: Viewer, blockId: string, revisionNumb
   const opIds = ops.map((o) => o.id);
   const signed = opIds.length
     ? await db
-        .select({ operationId: signOffs.operationId, by: users.name, at: signOffs.signedAt, note: signOffs.note })
+        .select({ operationId: signOffs.operationId, by: users.name, byId: signOffs.userId, at: signOffs.signedAt, note: signOffs.note })
         .from(signOffs)
         .innerJoin(users, eq(users.id, signOffs.userId))
         .where(inArray(signOffs.operationId, opIds))
@@ -81,6 +83,7 @@ export async function getBenchView(viewer: Viewer, blockId: string, revisionNumb
         .from(measurements)
         .where(inArray(measurements.operationId, opIds))
     : [];
+  const amendments = await listAmendments(opIds);
   const photos = await db
     .select({ id: attachments.id, operationId: attachments.operationId, createdAt: attachments.createdAt })
     .from(attachments)
@@ -102,8 +105,11 @@ export async function getBenchView(viewer: Viewer, blockId: string, revisionNumb
         parameters: op.parameters as Record<string, string | number>,
         caution: op.caution,
         planned: op.measurements as PlannedMeasurement[],
-        signOff: s ? { by: s.by, at: s.at.toISOString(), note: s.note } : null,
+        signOff: s ? { by: s.by, byId: s.byId, at: s.at.toISOString(), note: s.note } : null,
         recorded: recorded.filter((m) => m.operationId === op.id).map(({ key, valueSi, passed }) => ({ key, valueSi, passed })),
+        amendments: amendments
+          .filter((a) => a.operationId === op.id)
+          .map(({ key, previousValueSi, valueSi, passed, reason, by, at }) => ({ key, previousValueSi, valueSi, passed, reason, by, at: at.toISOString() })),
       };
     }),
     photos: photos.map((p) => ({ ...p, createdAt: p.createdAt.toISOString() })),

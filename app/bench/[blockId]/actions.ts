@@ -3,10 +3,10 @@
 import { revalidatePath } from "next/cache";
 import type { JobState } from "@/db/job-states";
 import { ALL_ROLES } from "@/lib/auth/session";
-import { signOffFromBench } from "@/lib/bench/sign-off";
+import { amendFromBench, signOffFromBench } from "@/lib/bench/sign-off";
 import { RequestRefusal } from "@/db/refusal";
 import { runFormAction, type FormResult } from "@/lib/forms/form-action";
-import { signOffSchema, type SignOffInput } from "@/lib/bench/sign-off-schema";
+import { amendSignOffSchema, signOffSchema, type SignOffInput } from "@/lib/bench/sign-off-schema";
 
 export interface SignOffResult {
   /** False when the operation was already signed (another phone, a retry): nothing was recorded twice. */
@@ -27,6 +27,11 @@ function besideTheInput(error: unknown, readings: SignOffInput["readings"]): unk
   if (byKey) {
     const index = readings.findIndex((r) => r.key === byKey[1]);
     return index >= 0 ? new RequestRefusal(error.status, error.message, `readings[${index}].value`) : error;
+  }
+  const byReading = /^readings\.(.+)$/.exec(error.field);
+  if (byReading && !/^\d+\.value$/.test(byReading[1]!)) {
+    const index = readings.findIndex((r) => r.key === byReading[1]);
+    if (index >= 0) return new RequestRefusal(error.status, error.message, `readings[${index}].value`);
   }
   const byIndex = /^readings\.(\d+)\.value$/.exec(error.field);
   if (byIndex) return new RequestRefusal(error.status, error.message, `readings[${byIndex[1]}].value`);
@@ -56,6 +61,35 @@ export async function signOffAction(_previous: FormResult<SignOffResult> | undef
     },
   });
   // Whatever happened, the page shows the truth again: a sign-off from another phone, a new revision.
+  if (result.httpStatus !== 401 && result.httpStatus !== 403) revalidatePath("/bench/[blockId]", "page");
+  return result;
+}
+
+export interface AmendResult {
+  jobState: JobState;
+  verified: boolean;
+}
+
+/**
+ * Corrects a signed operation's readings from the bench page, with a reason: the signer or an admin (the store
+ * refuses anyone else, and a verified job until an admin reopens it).
+ */
+export async function amendAction(_previous: FormResult<AmendResult> | undefined, formData: FormData): Promise<FormResult<AmendResult>> {
+  const result = await runFormAction<typeof amendSignOffSchema, AmendResult>(formData, {
+    schema: amendSignOffSchema,
+    roles: ALL_ROLES,
+    resetForm: false,
+    async work(value, user) {
+      try {
+        const outcome = await amendFromBench(user, value);
+        const data = { jobState: outcome.jobState, verified: outcome.verified };
+        const still = outcome.failed.length ? ` Still outside plan: ${outcome.failed.map((f) => f.label).join(", ")}.` : "";
+        return { message: outcome.verified ? "Corrected. Every operation is signed and within plan: the job is verified." : `Corrected.${still}`, data };
+      } catch (error) {
+        throw besideTheInput(error, value.readings);
+      }
+    },
+  });
   if (result.httpStatus !== 401 && result.httpStatus !== 403) revalidatePath("/bench/[blockId]", "page");
   return result;
 }

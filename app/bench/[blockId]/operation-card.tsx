@@ -18,6 +18,7 @@ export function OperationCard({
   canSign,
   maxPhotoBytes,
   timeZone,
+  canAmend,
 }: {
   blockId: string;
   operation: BenchOperation;
@@ -27,6 +28,8 @@ export function OperationCard({
   maxPhotoBytes: number;
   /** The shop's time zone, from the server page: sign-off times print in it. */
   timeZone: string;
+  /** Whether this viewer may correct the readings once signed (the signer or an admin, in machining). */
+  canAmend: boolean;
 }) {
   // Kept here rather than in the form: the summary shows the server's answer once the card turns signed.
   const signOff = useSignOffForm(operation);
@@ -53,7 +56,7 @@ export function OperationCard({
         ) : null}
       </header>
       {signed ? (
-        <SignedSummary operation={operation} caution={caution} photoIds={photoIds} lastResult={signOff.lastResult} timeZone={timeZone} />
+        <SignedSummary operation={operation} caution={caution} photoIds={photoIds} lastResult={signOff.lastResult} timeZone={timeZone} canAmend={canAmend} />
       ) : (
         <div className="flex flex-col gap-4 px-4 py-4">
           <OperationWork operation={operation} caution={caution} />

@@ -115,6 +115,7 @@ export default async function BenchPage({
                 canSign={canSign}
                 maxPhotoBytes={MAX_PHOTO_BYTES}
                 timeZone={timeZone}
+                canAmend={!superseded && view.job.state === "machining" && (user.role === "admin" || op.signOff?.byId === user.id)}
               />
             </li>
           ))}

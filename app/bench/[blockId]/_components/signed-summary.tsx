@@ -4,6 +4,7 @@ import type { SafetyCaution } from "@/lib/safety/cautions";
 import type { SignOffResult } from "../actions";
 import { defaultUnit, formatIn } from "../bench-units";
 import { ShopTime } from "../shop-time";
+import { AmendForm } from "./amend-form";
 import { OperationWork } from "./operation-work";
 
 /** A signed operation folded down: who signed and when, what was measured, the note and photos; the work on request. */
@@ -13,12 +14,15 @@ export function SignedSummary({
   photoIds,
   lastResult,
   timeZone,
+  canAmend,
 }: {
   operation: BenchOperation;
   caution: SafetyCaution | null;
   photoIds: string[];
   lastResult: FormResult<SignOffResult> | undefined;
   timeZone: string;
+  /** The signer or an admin, while the job is in machining. */
+  canAmend: boolean;
 }) {
   const signOff = operation.signOff!;
   const already = lastResult?.httpStatus === 200 && lastResult.data?.recorded === false;
@@ -58,7 +62,22 @@ export function SignedSummary({
           })}
         </ul>
       ) : null}
+      {operation.amendments.length ? (
+        <ul className="flex flex-col gap-1 text-sm" aria-label="Corrected readings">
+          {operation.amendments.map((a, i) => {
+            const planned = operation.planned.find((m) => m.key === a.key);
+            const unit = defaultUnit(planned?.quantity ?? "length");
+            return (
+              <li key={i} className="border-l-4 border-rule-strong pl-2">
+                <span className="font-semibold">{planned?.label ?? a.key}</span> corrected from <span className="numeric line-through">{formatIn(a.previousValueSi, unit)}</span> to{" "}
+                <span className="numeric font-semibold">{formatIn(a.valueSi, unit)}</span> by {a.by} at <ShopTime iso={a.at} timeZone={timeZone} withDay />: {a.reason}
+              </li>
+            );
+          })}
+        </ul>
+      ) : null}
       {signOff.note ? <p className="text-base">Note: {signOff.note}</p> : null}
+      {canAmend && operation.planned.length ? <AmendForm operation={operation} /> : null}
       {photoIds.length ? (
         <ul className="grid grid-cols-4 gap-2" aria-label="Photos of this operation">
           {photoIds.map((id) => (
