@@ -26,7 +26,7 @@ export interface BenchOperation {
 }
 
 export interface BenchView {
-  job: { id: string; number: string; state: JobState; customer: string; carburetor: string; tunerId: string };
+  job: { id: string; number: string; state: JobState; customer: string; carburetor: string; tunerId: string; tuner: string };
   block: { id: string; side: "primary" | "secondary" };
   revision: { id: string; number: number; status: "current" | "superseded"; releasedAt: string | null };
   currentRevision: number;
@@ -84,13 +84,14 @@ export async function getBenchView(viewer: Viewer, blockId: string, revisionNumb
         .where(inArray(measurements.operationId, opIds))
     : [];
   const amendments = await listAmendments(opIds);
+  const [tuner] = await db.select({ name: users.name }).from(users).where(eq(users.id, row.tunerId));
   const photos = await db
     .select({ id: attachments.id, operationId: attachments.operationId, createdAt: attachments.createdAt })
     .from(attachments)
     .where(eq(attachments.blockId, blockId))
     .orderBy(desc(attachments.createdAt));
   return {
-    job: { id: row.jobId, number: row.number, state: row.state, customer: row.customer, carburetor: row.carburetor, tunerId: row.tunerId },
+    job: { id: row.jobId, number: row.number, state: row.state, customer: row.customer, carburetor: row.carburetor, tunerId: row.tunerId, tuner: tuner?.name ?? "" },
     block: { id: row.blockId, side: row.side },
     revision: { ...revision, releasedAt: revision.releasedAt?.toISOString() ?? null },
     currentRevision: row.currentRevision,
@@ -158,6 +159,10 @@ export async function signOffOperation(
     if (!maySeeJob(viewer, job.state)) throw new RequestRefusal(404, "No such operation.", "operationId");
     if (op.revisionStatus !== "current" || op.revisionNumber !== job.currentRevision) {
       throw new RequestRefusal(409, `Revision ${op.revisionNumber} is superseded: work from revision ${job.currentRevision}.`, "operationId");
+    }
+    if (job.state === "held") {
+      const [tuner] = await tx.select({ name: users.name }).from(users).where(eq(users.id, job.tunerId));
+      throw new RequestRefusal(409, `Revision ${job.currentRevision} is on hold: ${tuner?.name ?? "the tuner"} is revising the plan. Nothing is signed until the next revision is released.`, "operationId");
     }
     if (job.state !== "released" && job.state !== "machining") {
       throw new RequestRefusal(409, `The job is ${job.state}: only released work is signed at the bench.`, "operationId");

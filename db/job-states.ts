@@ -1,6 +1,6 @@
 // The life of a job, and which moves between states are allowed. Checked on the server for every change.
 
-export const JOB_STATES = ["draft", "planned", "released", "machining", "verified", "delivered"] as const;
+export const JOB_STATES = ["draft", "planned", "released", "machining", "held", "verified", "delivered"] as const;
 export type JobState = (typeof JOB_STATES)[number];
 
 export const JOB_STATE_LABELS: Record<JobState, { label: string; meaning: string }> = {
@@ -8,6 +8,7 @@ export const JOB_STATE_LABELS: Record<JobState, { label: string; meaning: string
   planned: { label: "planned", meaning: "a revision is approved and waits to be released" },
   released: { label: "released", meaning: "travelers are out; the bench may start" },
   machining: { label: "machining", meaning: "the bench has signed at least one operation" },
+  held: { label: "on hold", meaning: "the inputs are being revised mid-machining; the bench waits for the next revision" },
   verified: { label: "verified", meaning: "every operation signed and every measurement within plan" },
   delivered: { label: "delivered", meaning: "handed back to the customer" },
 };
@@ -18,9 +19,14 @@ const ALLOWED: Record<JobState, readonly JobState[]> = {
   planned: ["draft", "released"],
   released: ["machining"],
   machining: ["verified"],
+  // A held job leaves hold by approving the revised inputs; the new revision supersedes the one on the bench.
+  held: ["planned"],
   verified: ["delivered", "machining"],
   delivered: [],
 };
+
+/** States whose inputs are being edited: the plan is solved live, layouts may be picked, approval comes next. */
+export const EDITING_STATES: readonly JobState[] = ["draft", "held"];
 
 export function canMove(from: JobState, to: JobState): boolean {
   return ALLOWED[from].includes(to);

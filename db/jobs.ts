@@ -195,18 +195,28 @@ export async function lockJob(db: Executor, id: string): Promise<Job> {
   return job;
 }
 
-/**
- * Editing the inputs of a job that already has an approved revision sends it back to draft: the approved
- * revision stays as it is until the next approval supersedes it.
- */
-async function touchForEdit(db: Executor, job: Job): Promise<void> {
-  await db
-    .update(jobs)
-    .set({ updatedAt: new Date(), state: "draft" })
-    .where(eq(jobs.id, job.id));
+/** How an edit treats a job the bench is machining: refused, or the job put on hold (confirmed by the editor). */
+export interface EditOptions {
+  confirmHold?: boolean | undefined;
 }
 
-export async function updateJob(actor: Viewer, id: string, input: { fields: Partial<JobFields>; tunerId?: string; customerId?: string }): Promise<void> {
+/**
+ * Editing the inputs of a job that already has an approved revision sends it back to draft: the approved
+ * revision stays as it is until the next approval supersedes it. A job in machining is put on hold instead,
+ * and only when the editor confirmed it: the bench keeps its record and shows the revision on hold.
+ */
+export async function touchForEdit(db: Executor, job: Job, options: EditOptions = {}): Promise<void> {
+  let state: Job["state"] = "draft";
+  if (job.state === "machining" || job.state === "held") {
+    if (job.state === "machining" && !options.confirmHold) {
+      throw new RequestRefusal(409, `The bench is machining revision ${job.currentRevision}: confirm putting the job on hold to edit it.`, "confirmHold");
+    }
+    state = "held";
+  }
+  await db.update(jobs).set({ updatedAt: new Date(), state }).where(eq(jobs.id, job.id));
+}
+
+export async function updateJob(actor: Viewer, id: string, input: { fields: Partial<JobFields>; tunerId?: string; customerId?: string }, options: EditOptions = {}): Promise<void> {
   await getDb().transaction(async (tx) => {
     const job = await lockJob(tx, id);
     const tunerId = input.tunerId ? await resolveTuner(tx, actor, input.tunerId) : job.tunerId;
@@ -218,7 +228,7 @@ export async function updateJob(actor: Viewer, id: string, input: { fields: Part
       .update(jobs)
       .set({ ...input.fields, tunerId, customerId: input.customerId ?? job.customerId })
       .where(eq(jobs.id, id));
-    await touchForEdit(tx, job);
+    await touchForEdit(tx, job, options);
     await recordAudit(tx, actor.id, "job.update", id, { from: job.state });
   });
 }
@@ -231,9 +241,10 @@ export type StageFields = Omit<typeof enrichmentStages.$inferInsert, "id" | "blo
  * travelers and bench record hang on it) as long as its side stays; a side that already has operations in a
  * revision cannot be removed. A stage keeps the tuner's pick when its valve and target are unchanged.
  */
-export async function saveJobBlocks(actor: Viewer, jobId: string, blocks: (BlockFields & { stages: StageFields[] })[]): Promise<void> {
+export async function saveJobBlocks(actor: Viewer, jobId: string, blocks: (BlockFields & { stages: StageFields[] })[], options: EditOptions = {}): Promise<void> {
   await getDb().transaction(async (tx) => {
     const job = await lockJob(tx, jobId);
+    if (job.state === "machining" && !options.confirmHold) await touchForEdit(tx, job, options);
     const existing = await tx.select().from(meteringBlocks).where(eq(meteringBlocks.jobId, jobId));
     for (const old of existing) {
       if (blocks.some((b) => b.side === old.side)) continue;
@@ -275,7 +286,7 @@ export async function saveJobBlocks(actor: Viewer, jobId: string, blocks: (Block
         );
       }
     }
-    await touchForEdit(tx, job);
+    await touchForEdit(tx, job, options);
     await recordAudit(tx, actor.id, "job.blocks", jobId, { sides: blocks.map((b) => b.side), from: job.state });
   });
 }

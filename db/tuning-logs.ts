@@ -3,8 +3,8 @@ import { and, asc, desc, eq } from "drizzle-orm";
 import { RequestRefusal } from "@/db/refusal";
 import { recordAudit } from "./audit";
 import { getDb } from "./client";
-import { lockJob } from "./jobs";
-import { enrichmentStages, jobs, logMappings, meteringBlocks, tuningLogs, users, type Job, type TuningLog } from "./schema";
+import { lockJob, touchForEdit } from "./jobs";
+import { enrichmentStages, logMappings, meteringBlocks, tuningLogs, users, type Job, type TuningLog } from "./schema";
 import type { Viewer } from "./visibility";
 
 export type NewTuningLog = Omit<typeof tuningLogs.$inferInsert, "id" | "uploadedAt" | "acceptedById" | "acceptedAt" | "acceptedChanges" | "nextRevisionNumber">;
@@ -104,7 +104,7 @@ export interface StageInputChange {
 /**
  * Accepts corrections from a log, all or nothing: under the job's lock, `decide` checks the log against the job
  * as it is now (refusing when the job moved on) and says what to write; the stages' inputs change, the log keeps
- * what was accepted and the revision it goes into, and the job goes back to draft for approval.
+ * what was accepted and the revision it goes into, and the job goes back to draft (on hold if in machining).
  */
 export async function acceptTuningLog(
   actor: Viewer,
@@ -145,7 +145,8 @@ export async function acceptTuningLog(
       .update(tuningLogs)
       .set({ acceptedById: actor.id, acceptedAt: now, acceptedChanges: changes, nextRevisionNumber: revision })
       .where(eq(tuningLogs.id, log.id));
-    await tx.update(jobs).set({ state: "draft", updatedAt: now }).where(eq(jobs.id, job.id));
+    // Accepting is the tuner's own confirmation: a job in machining goes on hold, any other back to draft.
+    await touchForEdit(tx, job, { confirmHold: true });
     await recordAudit(tx, actor.id, "job.log.accept", input.jobId, { logId: log.id, revision, changes });
     return { revision };
   });

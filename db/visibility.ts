@@ -9,7 +9,8 @@ export interface Viewer {
 }
 
 /** States whose work the bench (machinists) may see: the job reached the shop floor. */
-export const SHOP_FLOOR_STATES: readonly JobState[] = ["released", "machining", "verified", "delivered"];
+/** A held job stays on it: the bench page says the revision is on hold instead of vanishing mid-work. */
+export const SHOP_FLOOR_STATES: readonly JobState[] = ["released", "machining", "held", "verified", "delivered"];
 
 /**
  * The one rule of which jobs a viewer sees: machinists see work that reached the shop floor, tuners and admins

@@ -1,4 +1,5 @@
 import "server-only";
+import { RequestRefusal } from "@/db/refusal";
 import { renderTravelerPdf } from "@/lib/traveler/pdf/render-traveler";
 import { getJob } from "@/db/jobs";
 import type { Viewer } from "@/db/visibility";
@@ -23,6 +24,8 @@ export async function moveJob(
   to: JobState,
   options: { acknowledgeWarnings?: boolean | undefined } = {},
 ): Promise<{ state: JobState; revision: number }> {
+  // Reopening a verified job lets signed readings be corrected again: an admin's call, not the tuner's.
+  if (to === "machining" && actor.role !== "admin") throw new RequestRefusal(403, "Only an admin reopens a verified job for corrections.", "to");
   const moved = to === "planned" ? { state: to, ...(await approveRevision(actor, jobId, options)) } : await changeJobState(actor, jobId, to);
   if (moved.state === "released") await sendReleaseNotice(actor, jobId, moved.revision);
   return moved;

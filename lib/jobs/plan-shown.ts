@@ -1,4 +1,5 @@
 import "server-only";
+import { EDITING_STATES } from "@/db/job-states";
 import type { BlockRow, JobRecord } from "@/db/jobs";
 import { getRevisionSnapshot } from "@/db/revisions";
 import type { Job } from "@/db/schema";
@@ -23,7 +24,7 @@ export interface ShownPlan {
  */
 export async function shownPlanOf(record: JobRecord): Promise<ShownPlan | undefined> {
   const { job } = record;
-  if (job.state !== "draft" && job.currentRevision > 0) {
+  if (!EDITING_STATES.includes(job.state) && job.currentRevision > 0) {
     const revision = await getRevisionSnapshot(job.id, job.currentRevision);
     if (!revision) return undefined;
     return {

@@ -94,8 +94,15 @@ export const createJobSchema = jobFieldsSchema
   });
 export type CreateJobInput = z.output<typeof createJobSchema>;
 
+/** The editor's confirmation that a job in machining goes on hold (a checkbox "on", or true from the API). */
+export const confirmHoldField = z.preprocess((v) => v === "on" || v === "true" || v === true, z.boolean()).optional();
+
 export const updateJobSchema = jobFieldsSchema
-  .extend({ tunerId: z.uuid({ error: "Choose a tuner." }).optional(), customerId: z.uuid({ error: "Choose a customer." }).optional() })
+  .extend({
+    tunerId: z.uuid({ error: "Choose a tuner." }).optional(),
+    customerId: z.uuid({ error: "Choose a customer." }).optional(),
+    confirmHold: confirmHoldField,
+  })
   .superRefine(requireFuelDetails);
 export type UpdateJobInput = z.output<typeof updateJobSchema>;
 
@@ -160,6 +167,7 @@ export const blockSchema = z.object({
 
 export const jobBlocksSchema = z
   .object({
+    confirmHold: confirmHoldField,
     blocks: z.array(blockSchema, { error: "Add a metering block." }).min(1, { error: "Add a metering block." }).max(2, { error: "A carburetor has at most a primary and a secondary block." }),
   })
   .superRefine((value, ctx) => {

@@ -66,6 +66,7 @@ export default async function BenchPage({
 
       <main className="mx-auto flex max-w-xl flex-col gap-5 px-4 pt-4 pb-16">
         {superseded ? <SupersededWarning view={view} /> : null}
+        {!superseded && view.job.state === "held" ? <HoldNotice view={view} /> : null}
 
         <section aria-labelledby="bench-title" className="flex flex-col gap-1 border-b-4 border-ink pb-4">
           <p className="text-sm font-semibold uppercase tracking-[0.14em] text-graphite">
@@ -128,6 +129,18 @@ export default async function BenchPage({
         </SafetyNote>
       </main>
     </>
+  );
+}
+
+/** The tuner is revising the plan mid-machining: the record so far stays, and nothing more is signed for now. */
+function HoldNotice({ view }: { view: BenchView }) {
+  return (
+    <div role="alert" className="-mx-4 flex flex-col gap-2 border-y-8 border-ink bg-caution px-4 py-5 text-ink" data-testid="hold-notice">
+      <p className="text-2xl font-extrabold leading-tight">Revision {view.revision.number} is on hold — stop work on this block</p>
+      <p className="text-base">
+        {view.job.tuner || "The tuner"} is revising the plan. What is signed stays in the record; nothing more is signed until the next revision is released.
+      </p>
+    </div>
   );
 }
 

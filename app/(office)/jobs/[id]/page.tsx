@@ -5,7 +5,7 @@ import { listTuningLogs } from "@/db/tuning-logs";
 import { SHOP_FLOOR_STATES } from "@/db/visibility";
 import { ALL_ROLES, OFFICE_ROLES, requireRole } from "@/lib/auth/session";
 import { RequestRefusal } from "@/db/refusal";
-import { JOB_STATE_LABELS } from "@/db/job-states";
+import { EDITING_STATES, JOB_STATE_LABELS } from "@/db/job-states";
 import { parseIdParam } from "@/lib/http/route-params";
 import { shownPlanOf, type ShownPlan } from "@/lib/jobs/plan-shown";
 import { shopTimeZone } from "@/lib/server/env";
@@ -47,8 +47,9 @@ export default async function JobPage({ params }: Params) {
       refusal = error.message;
     }
   }
-  const choose = office && job.state === "draft" ? chooseLayoutAction.bind(null, job.id) : undefined;
-  const moves = office ? officeMoves(job.state, job.currentRevision + 1) : [];
+  const editing = EDITING_STATES.includes(job.state);
+  const choose = office && editing ? chooseLayoutAction.bind(null, job.id) : undefined;
+  const moves = office ? officeMoves(job.state, job.currentRevision + 1, user.role) : [];
   const logs = office ? await listTuningLogs(job.id) : [];
 
   return (
@@ -59,7 +60,7 @@ export default async function JobPage({ params }: Params) {
           <span className="flex flex-wrap items-center gap-3">
             <span className="numeric">{job.number}</span>
             <span data-testid="job-state">
-              <Tag tone={job.state === "draft" ? "muted" : "accent"}>{JOB_STATE_LABELS[job.state].label}</Tag>
+              <Tag tone={job.state === "held" ? "fault" : editing ? "muted" : "accent"}>{JOB_STATE_LABELS[job.state].label}</Tag>
             </span>
           </span>
         }
@@ -91,7 +92,7 @@ export default async function JobPage({ params }: Params) {
             action={changeStateAction.bind(null, job.id)}
             moves={moves}
             idle={officeIdleNote(job.state)}
-            dangers={job.state === "draft" && shown ? shown.plan.warnings.filter((w) => w.level === "danger").length : 0}
+            dangers={editing && shown ? shown.plan.warnings.filter((w) => w.level === "danger").length : 0}
           /> : null}
       </div>
       <div className="mb-8 grid gap-6 lg:grid-cols-[minmax(0,1fr)_32rem]">

@@ -1,10 +1,12 @@
 import type { JobState } from "@/db/job-states";
+import type { UserRole } from "@/db/schema";
 import type { StateMove } from "./state-controls";
 
 /** The moves the office makes from the job page; the bench moves a job into and out of machining itself. */
-export function officeMoves(state: JobState, nextRevision: number): StateMove[] {
+export function officeMoves(state: JobState, nextRevision: number, role: UserRole): StateMove[] {
   switch (state) {
     case "draft":
+    case "held":
       return [{ to: "planned", label: `Approve as revision ${nextRevision}`, title: "Solve the plan and keep it as a revision", primary: true }];
     case "planned":
       return [
@@ -12,7 +14,10 @@ export function officeMoves(state: JobState, nextRevision: number): StateMove[] 
         { to: "released", label: "Release to the bench", title: "Travelers go out; the bench may start", primary: true },
       ];
     case "verified":
-      return [{ to: "delivered", label: "Mark delivered", title: "Handed back to the customer", primary: true }];
+      return [
+        ...(role === "admin" ? [{ to: "machining" as const, label: "Reopen for corrections", title: "Back to machining so a signed reading can be corrected", primary: false }] : []),
+        { to: "delivered", label: "Mark delivered", title: "Handed back to the customer", primary: true },
+      ];
     default:
       return [];
   }
@@ -23,7 +28,7 @@ export function officeIdleNote(state: JobState): string {
   switch (state) {
     case "released":
     case "machining":
-      return "The bench works from the current revision. Editing the inputs starts a new one.";
+      return "The bench works from the current revision. Editing the inputs starts a new one (in machining, the job goes on hold).";
     case "delivered":
       return "Delivered. Editing the inputs starts a new revision for the car's next visit.";
     default:

@@ -10,6 +10,7 @@ const STATE_TONE: Record<JobState, "plain" | "accent" | "muted"> = {
   planned: "plain",
   released: "accent",
   machining: "accent",
+  held: "accent",
   verified: "plain",
   delivered: "muted",
 };

@@ -19,21 +19,26 @@ const patchSchema = jobFieldsSchema
     tunerId: z.uuid({ error: "tunerId must be a user's id" }).optional(),
     customerId: z.uuid({ error: "customerId must be a customer's id" }).optional(),
     blocks: z.unknown().optional(),
+    /** Required (true) to edit a job the bench is machining: it goes on hold until the next approval. */
+    confirmHold: z.boolean({ error: "confirmHold must be true or false" }).optional(),
   })
   .strict()
   .superRefine(requireOneAmbient);
 
-/** Changes the job's inputs (and, with `blocks`, replaces its blocks and stages). Sends an approved job back to draft. */
+/**
+ * Changes the job's inputs (and, with `blocks`, replaces its blocks and stages). Sends an approved job back to
+ * draft; a job in machining goes on hold, only with `confirmHold: true` (409 naming it otherwise).
+ */
 export const PATCH = apiRoute({ roles: OFFICE_ROLES, params: idParams("id"), body: patchSchema }, async ({ user, params, body }) => {
-  const { blocks, tunerId, customerId, ...fields } = body;
+  const { blocks, tunerId, customerId, confirmHold, ...fields } = body;
   const checkedBlocks = blocks === undefined ? undefined : jobBlocksSchema.safeParse({ blocks });
   if (checkedBlocks && !checkedBlocks.success) return invalidInput(checkedBlocks.error);
   const existing = await getJob(user, params.id);
   if (!existing) return apiError(404, "not_found", "No such job.");
-  if (checkedBlocks?.success) await saveJobBlocks(user, params.id, blockColumns(checkedBlocks.data));
+  if (checkedBlocks?.success) await saveJobBlocks(user, params.id, blockColumns(checkedBlocks.data), { confirmHold });
   const columns = jobColumns(fields);
   if (Object.keys(columns).length || tunerId || customerId) {
-    await updateJob(user, params.id, { fields: columns, tunerId, customerId });
+    await updateJob(user, params.id, { fields: columns, tunerId, customerId }, { confirmHold });
   }
   const record = await getJob(user, params.id);
   return Response.json({ job: jobDto(record!) });

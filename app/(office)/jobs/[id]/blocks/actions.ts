@@ -11,7 +11,8 @@ import { requireVisibleJob } from "../job-guard";
 
 /**
  * Replaces the job's blocks and stages with the form's, all or nothing, and goes back to the job's page. A
- * job with an approved revision goes back to draft; the revision itself stays as it was.
+ * job with an approved revision goes back to draft (on hold, when confirmed, if the bench is machining it); the
+ * revision itself stays as it was.
  */
 export async function saveBlocksAction(jobId: string, _previous: FormResult | undefined, formData: FormData): Promise<FormResult> {
   let saved: string | undefined;
@@ -21,7 +22,7 @@ export async function saveBlocksAction(jobId: string, _previous: FormResult | un
     resetForm: false,
     async work(value, user) {
       const id = await requireVisibleJob(user, jobId);
-      await saveJobBlocks(user, id, blockColumns(value));
+      await saveJobBlocks(user, id, blockColumns(value), { confirmHold: value.confirmHold });
       revalidatePath(`/jobs/${id}`);
       saved = id;
       return "Blocks and stages saved.";

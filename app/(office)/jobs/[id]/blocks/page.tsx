@@ -22,7 +22,7 @@ export default async function JobBlocksPage({ params }: { params: Promise<{ id: 
     <>
       <PageHeader kicker={`Job ${record.job.number} · ${record.customer.name}`} title="Metering blocks and stages" />
       <div className="flex flex-col gap-6">
-        <RevisionNotice record={record} />
+        <RevisionNotice record={record} formId="job-blocks" />
         <BlocksEditor
           action={saveBlocksAction.bind(null, record.job.id)}
           defaultValue={blocksFormValues(record.blocks, user.lengthUnit)}

@@ -21,10 +21,10 @@ export async function updateJobAction(jobId: string, _previous: FormResult | und
     resetForm: false,
     async work(value, user) {
       const id = await requireVisibleJob(user, jobId);
-      const { tunerId, customerId, ...fields } = value;
+      const { tunerId, customerId, confirmHold, ...fields } = value;
       // The form carries every field: an emptied optional box clears the stored figure.
       const columns = jobColumns({ ...fields, targetPower: fields.targetPower, chargeTemperature: fields.chargeTemperature });
-      await updateJob(user, id, { fields: columns, tunerId, customerId });
+      await updateJob(user, id, { fields: columns, tunerId, customerId }, { confirmHold });
       revalidatePath(`/jobs/${id}`);
       saved = id;
       return "Engine and fuel saved.";

@@ -22,7 +22,7 @@ export default async function EditJobPage({ params }: { params: Promise<{ id: st
     <>
       <PageHeader kicker={`Job ${record.job.number} · ${record.customer.name}`} title="Engine and fuel" />
       <div className="flex flex-col gap-6">
-        <RevisionNotice record={record} />
+        <RevisionNotice record={record} formId="job-fields" />
         <Sheet>
           <JobFieldsEditor action={updateJobAction.bind(null, record.job.id)} defaultValue={jobFormValues(record.job, user.lengthUnit)} cancelHref={`/jobs/${record.job.id}`} />
         </Sheet>

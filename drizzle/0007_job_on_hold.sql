@@ -1,0 +1,1 @@
+ALTER TYPE "public"."job_state" ADD VALUE 'held' BEFORE 'verified';
