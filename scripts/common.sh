@@ -117,7 +117,7 @@ ensure_auth_secret() {
 ensure_build() {
   local dist="$ROOT/${NEXT_DIST_DIR:-.next}"
   local stamp="$dist/BUILD_ID"
-  if [ ! -f "$stamp" ] || [ -n "$(cd "$ROOT" && find app components db lib public fonts proxy.ts next.config.ts postcss.config.mjs package-lock.json tsconfig.json -newer "$stamp" -print -quit 2>/dev/null)" ]; then
+  if [ ! -f "$stamp" ] || [ -n "$(cd "$ROOT" && find app components db lib public fonts proxy.ts instrumentation.ts next.config.ts postcss.config.mjs package-lock.json tsconfig.json -newer "$stamp" -print -quit 2>/dev/null)" ]; then
     log "building the app (next build)"
     (cd "$ROOT" && npx next build)
   fi
