@@ -48,6 +48,13 @@ import { POST as pickupTubeRoute } from "@/app/api/calc/pickup-tube/route";
 import { POST as stagingRoute } from "@/app/api/calc/staging/route";
 import { blocksBody } from "./support/jobs";
 import { GET as healthRoute } from "@/app/api/health/route";
+import { GET as listLogsRoute, POST as uploadLogRoute } from "@/app/api/jobs/[id]/logs/route";
+import { POST as previewLogRoute } from "@/app/api/jobs/[id]/logs/preview/route";
+import { GET as logAnalysisRoute } from "@/app/api/jobs/[id]/logs/[logId]/analysis/route";
+import { POST as acceptLogRoute } from "@/app/api/jobs/[id]/logs/[logId]/accept/route";
+import { PATCH as amendRoute } from "@/app/api/operations/[id]/sign-off/route";
+import { amendAction } from "@/app/bench/[blockId]/actions";
+import { saveLogSettingsAction } from "@/app/(office)/shop/drills/actions";
 
 async function machinistId(): Promise<string> {
   const [row] = await testDb.select({ id: schema.users.id }).from(schema.users).where(eq(schema.users.email, "machinist@blockwright.test"));
@@ -341,6 +348,85 @@ const CASES: AccessCase[] = [
           formData({ smallestRestrictionDrill: "#60", largestRestrictionDrill: "3/32", "minWeb.value": "0.025", "minWeb.unit": "in" }),
         )
       ).httpStatus,
+  },
+  {
+    name: "GET /api/jobs/{id}/logs",
+    expected: OFFICE_ONLY(200),
+    setup: async () => (await makeJob("released")).id,
+    call: async (id) => (await listLogsRoute(new Request(`http://127.0.0.1/api/jobs/${id}/logs`), jobParams(id))).status,
+  },
+  {
+    name: "POST /api/jobs/{id}/logs/preview",
+    expected: OFFICE_ONLY(200),
+    setup: async () => (await makeJob("released")).id,
+    call: async (id) => {
+      const form = new FormData();
+      form.set("file", new Blob(["MAP,Lambda\n101,0.9\n"], { type: "text/csv" }), "log.csv");
+      return (await previewLogRoute(new Request(`http://127.0.0.1/api/jobs/${id}/logs/preview`, { method: "POST", body: form }), jobParams(id))).status;
+    },
+  },
+  {
+    // The role is checked before the mapping is read: a caller who may not upload learns nothing about it.
+    name: "POST /api/jobs/{id}/logs (no mapping)",
+    expected: OFFICE_ONLY(400),
+    setup: async () => (await makeJob("released")).id,
+    call: async (id) => {
+      const form = new FormData();
+      form.set("file", new Blob(["MAP,Lambda\n101,0.9\n"], { type: "text/csv" }), "log.csv");
+      return (await uploadLogRoute(new Request(`http://127.0.0.1/api/jobs/${id}/logs`, { method: "POST", body: form }), jobParams(id))).status;
+    },
+  },
+  {
+    name: "GET /api/jobs/{id}/logs/{logId}/analysis (unknown log)",
+    expected: OFFICE_ONLY(404),
+    setup: async () => (await makeJob("released")).id,
+    call: async (id) => {
+      const logId = "00000000-0000-4000-8000-000000000000";
+      return (await logAnalysisRoute(new Request(`http://127.0.0.1/x`), { params: Promise.resolve({ id, logId }) })).status;
+    },
+  },
+  {
+    name: "POST /api/jobs/{id}/logs/{logId}/accept (unknown log)",
+    expected: OFFICE_ONLY(404),
+    setup: async () => (await makeJob("released")).id,
+    call: async (id) => {
+      const logId = "00000000-0000-4000-8000-000000000000";
+      const body = { stageIds: ["00000000-0000-4000-8000-000000000001"] };
+      return (await acceptLogRoute(jsonRequest(`/api/jobs/${id}/logs/${logId}/accept`, "POST", body), { params: Promise.resolve({ id, logId }) })).status;
+    },
+  },
+  {
+    name: "PATCH /api/operations/{id}/sign-off (not signed yet)",
+    expected: EVERYONE(409),
+    setup: async () => {
+      const job = await makeJob("released");
+      const [op] = await testDb
+        .select({ id: schema.operations.id })
+        .from(schema.operations)
+        .where(sql`${schema.operations.blockId} in (select id from metering_blocks where job_id = ${job.id}) and ${schema.operations.kind} = 'finish'`);
+      return op!.id;
+    },
+    call: async (id) =>
+      (await amendRoute(jsonRequest(`/api/operations/${id}/sign-off`, "PATCH", { readings: [{ key: "x", value: 1, unit: "in" }], reason: "A slip" }), jobParams(id))).status,
+  },
+  {
+    name: "action amendAction (not signed yet)",
+    expected: EVERYONE(409),
+    setup: async () => {
+      const job = await makeJob("released");
+      const [op] = await testDb
+        .select({ id: schema.operations.id })
+        .from(schema.operations)
+        .where(sql`${schema.operations.blockId} in (select id from metering_blocks where job_id = ${job.id}) and ${schema.operations.kind} = 'finish'`);
+      return op!.id;
+    },
+    call: async (id) =>
+      (await amendAction(undefined, nestedFormData({ operationId: id, reason: "A slip", readings: [{ key: "x", value: "1", unit: "in" }] }))).httpStatus,
+  },
+  {
+    name: "action saveLogSettingsAction",
+    expected: ADMIN_ONLY(200),
+    call: async () => (await saveLogSettingsAction(undefined, formData({ fullThrottleAbovePct: "75", "binWidth.value": "0.5", "binWidth.unit": "psi" }))).httpStatus,
   },
   {
     name: "action chooseLayoutAction",

@@ -2,10 +2,10 @@
 
 import { revalidatePath } from "next/cache";
 import { setDrillStocked, setSystemStocked } from "@/db/drill-stock";
-import { updateShopSettings } from "@/db/shop-settings";
+import { updateLogSettings, updateShopSettings } from "@/db/shop-settings";
 import { toSI } from "@/lib/engineering/units";
 import { runFormAction, type FormResult } from "@/lib/forms/form-action";
-import { drillStockSchema, drillSystemStockSchema, shopLimitsSchema } from "./schema";
+import { drillStockSchema, drillSystemStockSchema, logSettingsSchema, shopLimitsSchema } from "./schema";
 
 // Only an admin changes the rack and the restriction limits. The solver reads both afresh for every plan, so
 // nothing else is refreshed.
@@ -47,6 +47,22 @@ export async function saveShopLimitsAction(_previous: FormResult | undefined, fo
       });
       revalidatePath("/shop/drills");
       return "Restriction limits saved. Plans solved from now on keep to them.";
+    },
+  });
+}
+
+export async function saveLogSettingsAction(_previous: FormResult | undefined, formData: FormData): Promise<FormResult> {
+  return runFormAction(formData, {
+    schema: logSettingsSchema,
+    roles: ["admin"],
+    resetForm: false,
+    async work({ fullThrottleAbovePct, binWidth }, user) {
+      await updateLogSettings(user.id, {
+        fullThrottleAbovePct: fullThrottleAbovePct ?? null,
+        binWidthPa: binWidth === undefined ? null : toSI("pressure", binWidth.value, binWidth.unit),
+      });
+      revalidatePath("/shop/drills");
+      return "Log settings saved. Logs read from now on use them.";
     },
   });
 }

@@ -1,6 +1,9 @@
 import type { Metadata } from "next";
 import { listStockedLabels } from "@/db/drill-stock";
-import { getShopSettings } from "@/db/shop-settings";
+import { getLogSettings, getShopSettings } from "@/db/shop-settings";
+import { DEFAULT_BIN_WIDTH_PA } from "@/lib/engineering/log-bins";
+import { DEFAULT_FULL_THROTTLE_ABOVE_PCT } from "@/lib/engineering/steady-readings";
+import { LogSettings, type LogSettingsValues } from "./log-settings-form";
 import { OFFICE_ROLES, requireRole } from "@/lib/auth/session";
 import { fixed } from "@/lib/format/display";
 import { ALL_DRILLS, findDrill } from "@/lib/engineering/drills";
@@ -10,7 +13,7 @@ import {
   DEFAULT_SMALLEST_RESTRICTION_DRILL_LABEL,
 } from "@/lib/engineering/restriction-limits";
 import type { DrillSystem } from "@/lib/engineering/types";
-import { M_PER_IN, M_PER_MM } from "@/lib/engineering/unit-factors";
+import { M_PER_IN, M_PER_MM, PA_PER_PSI } from "@/lib/engineering/unit-factors";
 import { PageHeader, Sheet } from "@/components/ui/sheet";
 import { DrillRack, type RackGroup } from "./drill-rack";
 import { ShopLimits, type ShopLimitsValues } from "./limits-form";
@@ -27,7 +30,25 @@ const TITLES: Record<DrillSystem, string> = {
 
 export default async function DrillRackPage() {
   const user = await requireRole(OFFICE_ROLES, "/shop/drills");
-  const [stocked, settings] = await Promise.all([listStockedLabels(), getShopSettings()]);
+  const [stocked, settings, logs] = await Promise.all([
+    listStockedLabels(),
+    getShopSettings(),
+    getLogSettings({ fullThrottleAbovePct: DEFAULT_FULL_THROTTLE_ABOVE_PCT, binWidthPa: DEFAULT_BIN_WIDTH_PA }),
+  ]);
+  const psiText = (pa: number) => `${fixed(pa / PA_PER_PSI, 2)} psi`;
+  const logValues: LogSettingsValues = {
+    fullThrottleAbovePct: {
+      shown: `${logs.fullThrottleAbovePct} %`,
+      stored: logs.isDefault.fullThrottleAbovePct ? "" : String(logs.fullThrottleAbovePct),
+      isDefault: logs.isDefault.fullThrottleAbovePct,
+    },
+    binWidth: {
+      shown: psiText(logs.binWidthPa),
+      stored: logs.isDefault.binWidthPa ? "" : String(Number((logs.binWidthPa / PA_PER_PSI).toPrecision(6))),
+      isDefault: logs.isDefault.binWidthPa,
+    },
+    defaults: { fullThrottleAbovePct: `${DEFAULT_FULL_THROTTLE_ABOVE_PCT} %`, binWidth: psiText(DEFAULT_BIN_WIDTH_PA) },
+  };
   const number = (lengthM: number) => (user.lengthUnit === "mm" ? fixed(lengthM / M_PER_MM, 3) : fixed(lengthM / M_PER_IN, 4));
   const size = (diameterM: number) => `${number(diameterM)} ${user.lengthUnit}`;
   const drillShown = (label: string) => {
@@ -87,6 +108,13 @@ export default async function DrillRackPage() {
           unit={user.lengthUnit}
           canEdit={user.role === "admin"}
         />
+      </Sheet>
+      <Sheet title="Dyno log reading" className="mb-6">
+        <p className="mb-4 max-w-3xl text-sm text-graphite">
+          How air-fuel logs are read: readings with the throttle opened beyond the threshold count as full throttle, the rest as
+          part throttle; readings are grouped by manifold pressure in bins of this width.
+        </p>
+        <LogSettings values={logValues} canEdit={user.role === "admin"} />
       </Sheet>
       <DrillRack groups={groups} stocked={[...stocked]} canEdit={user.role === "admin"} />
     </>

@@ -58,3 +58,14 @@ export const shopLimitsSchema = z
   });
 
 export type ShopLimitsInput = z.output<typeof shopLimitsSchema>;
+
+// How dyno logs are read: above which throttle opening a reading is full throttle, and the width of a
+// manifold-pressure bin. Empty keeps the default.
+export const logSettingsSchema = z.object({
+  fullThrottleAbovePct: z
+    .number({ error: "The full-throttle threshold must be a number." })
+    .min(1, { error: "The full-throttle threshold must be between 1 and 99 %." })
+    .max(99, { error: "The full-throttle threshold must be between 1 and 99 %." })
+    .optional(),
+  binWidth: optionalQuantity("bin width", ["psi", "kPa"] as const, { min: 0 }),
+});
