@@ -2,6 +2,7 @@ import { execFileSync } from "node:child_process";
 import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
+import { fileURLToPath } from "node:url";
 import { expect, test } from "@playwright/test";
 import { screenshotPath } from "./support/accounts";
 import { openSignedIn } from "./support/sessions";
@@ -10,7 +11,7 @@ import { JobPage, newJobBody } from "./support/planner";
 // Back from the dyno: a released job's log is read, mapped and judged against the plan; the tuner carries
 // the correction into revision 2, whose traveler lists it, while revision 1 reads as superseded at the bench.
 
-const FIXTURE = path.join(__dirname, "fixtures", "dyno-pull.csv");
+const FIXTURE = fileURLToPath(new URL("./fixtures/dyno-pull.csv", import.meta.url));
 
 const BLOCKS = {
   blocks: [
