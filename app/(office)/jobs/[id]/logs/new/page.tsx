@@ -7,6 +7,7 @@ import { parseIdParam } from "@/lib/http/route-params";
 import { ButtonLink } from "@/components/ui/button";
 import { PageHeader, Sheet } from "@/components/ui/sheet";
 import { LogUpload } from "../_components/log-upload";
+import { TypedReadings } from "../_components/typed-readings";
 
 export const metadata: Metadata = { title: "Read an air-fuel log" };
 
@@ -30,7 +31,7 @@ export default async function NewLogPage({ params }: { params: Promise<{ id: str
           </ButtonLink>
         }
       />
-      <Sheet>
+      <Sheet title="A log file">
         {onEngine ? (
           <LogUpload jobId={job.id} revision={job.currentRevision} />
         ) : (
@@ -39,6 +40,11 @@ export default async function NewLogPage({ params }: { params: Promise<{ id: str
           </p>
         )}
       </Sheet>
+      {onEngine ? (
+        <Sheet title="Or type a few readings" className="mt-6">
+          <TypedReadings jobId={job.id} />
+        </Sheet>
+      ) : null}
     </>
   );
 }
