@@ -18,7 +18,7 @@ export interface RevisionSnapshot {
   job: Record<string, unknown>;
   blocks: BlockRow[];
   plan: ConversionPlan;
-  names?: RevisionNames | undefined;
+  names?: Partial<RevisionNames> | undefined;
 }
 
 async function loadBlocks(db: Executor, jobId: string): Promise<BlockRow[]> {
