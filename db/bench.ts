@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, desc, eq, inArray } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import type { PlannedMeasurement } from "@/lib/engineering/conversion-plan";
 import type { JobState } from "@/db/job-states";
 import { RequestRefusal } from "@/db/refusal";
@@ -7,8 +7,9 @@ import { recordAudit } from "./audit";
 import { getDb } from "./client";
 import { lockJob } from "./jobs";
 import { maySeeJob, type Viewer } from "./visibility";
+import { revisionNameColumns } from "./revision-names";
 import { currentRevisionComplete } from "./revisions";
-import { attachments, customers, jobs, measurementAmendments, measurements, meteringBlocks, operations, planRevisions, signOffs, users } from "./schema";
+import { attachments, jobs, measurementAmendments, measurements, meteringBlocks, operations, planRevisions, signOffs, users } from "./schema";
 
 export interface BenchOperation {
   id: string;
@@ -26,7 +27,8 @@ export interface BenchOperation {
 }
 
 export interface BenchView {
-  job: { id: string; number: string; state: JobState; customer: string; carburetor: string; tunerId: string; tuner: string };
+  /** The job's state now; its customer, carburetor and tuner as the revision was approved. */
+  job: { id: string; number: string; state: JobState; customer: string; carburetor: string; tuner: string; tunerId: string };
   block: { id: string; side: "primary" | "secondary" };
   revision: { id: string; number: number; status: "current" | "superseded"; releasedAt: string | null };
   currentRevision: number;
@@ -35,8 +37,9 @@ export interface BenchView {
 }
 
 /**
- * One block in one revision as the bench sees it. Machinists see only released work; undefined when the
- * block, the revision or the permission is missing.
+ * One block in one revision as the bench sees it, named as the revision keeps it (a customer renamed later does
+ * not change an approved revision). Machinists see only released work; undefined when the block, the revision
+ * or the permission is missing.
  */
 export async function getBenchView(viewer: Viewer, blockId: string, revisionNumber?: number): Promise<BenchView | undefined> {
   const db = getDb();
@@ -50,17 +53,23 @@ export async function getBenchView(viewer: Viewer, blockId: string, revisionNumb
       carburetor: jobs.carburetor,
       currentRevision: jobs.currentRevision,
       tunerId: jobs.tunerId,
-      customer: customers.name,
     })
     .from(meteringBlocks)
     .innerJoin(jobs, eq(jobs.id, meteringBlocks.jobId))
-    .innerJoin(customers, eq(customers.id, jobs.customerId))
     .where(eq(meteringBlocks.id, blockId));
   if (!row) return undefined;
   if (!maySeeJob(viewer, row.state)) return undefined;
   const number = revisionNumber ?? row.currentRevision;
   const [revision] = await db
-    .select({ id: planRevisions.id, number: planRevisions.number, status: planRevisions.status, releasedAt: planRevisions.releasedAt })
+    .select({
+      id: planRevisions.id,
+      number: planRevisions.number,
+      status: planRevisions.status,
+      releasedAt: planRevisions.releasedAt,
+      carburetor: sql<string | null>`${planRevisions.snapshot} #>> '{job,carburetor}'`,
+      customer: revisionNameColumns.customer,
+      tuner: revisionNameColumns.tuner,
+    })
     .from(planRevisions)
     .where(and(eq(planRevisions.jobId, row.jobId), eq(planRevisions.number, number)));
   if (!revision) return undefined;
@@ -84,16 +93,23 @@ export async function getBenchView(viewer: Viewer, blockId: string, revisionNumb
         .where(inArray(measurements.operationId, opIds))
     : [];
   const amendments = await listAmendments(opIds);
-  const [tuner] = await db.select({ name: users.name }).from(users).where(eq(users.id, row.tunerId));
   const photos = await db
     .select({ id: attachments.id, operationId: attachments.operationId, createdAt: attachments.createdAt })
     .from(attachments)
     .where(eq(attachments.blockId, blockId))
     .orderBy(desc(attachments.createdAt));
   return {
-    job: { id: row.jobId, number: row.number, state: row.state, customer: row.customer, carburetor: row.carburetor, tunerId: row.tunerId, tuner: tuner?.name ?? "" },
+    job: {
+      id: row.jobId,
+      number: row.number,
+      state: row.state,
+      customer: revision.customer,
+      carburetor: revision.carburetor ?? row.carburetor,
+      tuner: revision.tuner,
+      tunerId: row.tunerId,
+    },
     block: { id: row.blockId, side: row.side },
-    revision: { ...revision, releasedAt: revision.releasedAt?.toISOString() ?? null },
+    revision: { id: revision.id, number: revision.number, status: revision.status, releasedAt: revision.releasedAt?.toISOString() ?? null },
     currentRevision: row.currentRevision,
     operations: ops.map((op) => {
       const s = signed.find((x) => x.operationId === op.id);

@@ -7,6 +7,7 @@ import { RequestRefusal } from "@/db/refusal";
 import { recordAudit } from "./audit";
 import { getDb, type Executor } from "./client";
 import { insertCustomer } from "./customers";
+import { revisionNameColumns } from "./revision-names";
 import { customers, enrichmentStages, jobs, meteringBlocks, operations, planRevisions, users, type Job } from "./schema";
 
 export interface JobListRow {
@@ -116,7 +117,6 @@ export async function getJob(viewer: Viewer, id: string): Promise<JobRecord | un
         .where(inArray(enrichmentStages.blockId, blockRows.map((b) => b.id)))
         .orderBy(asc(enrichmentStages.position))
     : [];
-  const approvers = alias(users, "approver");
   const revisionRows = await db
     .select({
       id: planRevisions.id,
@@ -124,10 +124,10 @@ export async function getJob(viewer: Viewer, id: string): Promise<JobRecord | un
       status: planRevisions.status,
       approvedAt: planRevisions.approvedAt,
       releasedAt: planRevisions.releasedAt,
-      approvedBy: approvers.name,
+      // The approver's name as the revision keeps it: a later rename leaves the record of the approval alone.
+      approvedBy: revisionNameColumns.approvedBy,
     })
     .from(planRevisions)
-    .innerJoin(approvers, eq(approvers.id, planRevisions.approvedById))
     .where(eq(planRevisions.jobId, id))
     .orderBy(desc(planRevisions.number));
   return {

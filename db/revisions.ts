@@ -4,16 +4,21 @@ import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
 import { canMove, type JobState } from "@/db/job-states";
 import { RequestRefusal } from "@/db/refusal";
 import { recordAudit } from "./audit";
+import { namesAtApproval, revisionNameColumns, withReleasedBy, type RevisionNames } from "./revision-names";
 import { getDb, type Executor } from "./client";
 import { lockJob, type BlockRow } from "./jobs";
 import type { Viewer } from "./visibility";
 import { enrichmentStages, jobs, measurements, meteringBlocks, operations, planRevisions, signOffs, type Job } from "./schema";
 
-/** What an approved revision keeps forever: the inputs as they were, and the plan solved from them. */
+/**
+ * What an approved revision keeps forever: the inputs as they were, the plan solved from them, and the names it
+ * prints as they were then (absent from revisions approved before the names were kept; see revision-names.ts).
+ */
 export interface RevisionSnapshot {
   job: Record<string, unknown>;
   blocks: BlockRow[];
   plan: ConversionPlan;
+  names?: Partial<RevisionNames> | undefined;
 }
 
 async function loadBlocks(db: Executor, jobId: string): Promise<BlockRow[]> {
@@ -58,7 +63,8 @@ export async function storeRevision(actor: Viewer, jobId: string, decide: (job: 
       .update(planRevisions)
       .set({ status: "superseded", supersededAt: now })
       .where(and(eq(planRevisions.jobId, jobId), eq(planRevisions.status, "current")));
-    const snapshot: RevisionSnapshot = { job: { ...job }, blocks, plan };
+    const names = await namesAtApproval(tx, { customerId: job.customerId, tunerId: job.tunerId, approverId: actor.id });
+    const snapshot: RevisionSnapshot = { job: { ...job }, blocks, plan, names };
     const [revision] = await tx
       .insert(planRevisions)
       .values({ jobId, number, snapshot: JSON.parse(JSON.stringify(snapshot)), approvedById: actor.id, approvedAt: now, acknowledgedWarnings })
@@ -111,7 +117,7 @@ export async function currentRevisionComplete(
 
 /**
  * Moves the job to another state when the move is allowed: planned -> released stamps the revision's
- * release; verified needs a complete bench record. Approval (-> planned) keeps a revision: `storeRevision`.
+ * release (and keeps the releaser's name with it); verified needs a complete bench record. Approval (-> planned) keeps a revision: `storeRevision`.
  */
 export async function changeJobState(actor: Viewer, jobId: string, to: Exclude<JobState, "planned">): Promise<{ state: JobState; revision: number }> {
   return getDb().transaction(async (tx) => {
@@ -121,7 +127,7 @@ export async function changeJobState(actor: Viewer, jobId: string, to: Exclude<J
     if (to === "released") {
       await tx
         .update(planRevisions)
-        .set({ releasedAt: now, releasedById: actor.id })
+        .set({ releasedAt: now, releasedById: actor.id, snapshot: withReleasedBy(actor.id) })
         .where(and(eq(planRevisions.jobId, jobId), eq(planRevisions.number, job.currentRevision)));
     }
     if (to === "verified") {
@@ -134,10 +140,19 @@ export async function changeJobState(actor: Viewer, jobId: string, to: Exclude<J
   });
 }
 
-export async function getRevisionSnapshot(jobId: string, number: number): Promise<{ id: string; status: string; snapshot: RevisionSnapshot } | undefined> {
+/**
+ * One approved revision's snapshot, with the names it prints resolved: as it keeps them, or for a revision
+ * approved before names were kept, as the rows it points at are named now.
+ */
+export async function getRevisionSnapshot(
+  jobId: string,
+  number: number,
+): Promise<{ id: string; status: string; snapshot: RevisionSnapshot; names: Omit<RevisionNames, "releasedBy"> & { releasedBy: string | null } } | undefined> {
   const [row] = await getDb()
-    .select({ id: planRevisions.id, status: planRevisions.status, snapshot: planRevisions.snapshot })
+    .select({ id: planRevisions.id, status: planRevisions.status, snapshot: planRevisions.snapshot, ...revisionNameColumns })
     .from(planRevisions)
     .where(and(eq(planRevisions.jobId, jobId), eq(planRevisions.number, number)));
-  return row ? { ...row, snapshot: row.snapshot as RevisionSnapshot } : undefined;
+  if (!row) return undefined;
+  const { customer, tuner, approvedBy, releasedBy, ...revision } = row;
+  return { ...revision, snapshot: row.snapshot as RevisionSnapshot, names: { customer, tuner, approvedBy, releasedBy } };
 }

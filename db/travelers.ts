@@ -1,15 +1,12 @@
 import "server-only";
 import { and, asc, eq } from "drizzle-orm";
-import { alias } from "drizzle-orm/pg-core";
 import { RequestRefusal } from "@/db/refusal";
 import { getDb } from "./client";
 import type { BlockRow } from "./jobs";
+import { revisionNameColumns } from "./revision-names";
 import type { RevisionSnapshot } from "./revisions";
-import { customers, jobs, meteringBlocks, operations, planRevisions, users, type Job, type MeteringBlock, type Operation, type PlanRevision } from "./schema";
+import { jobs, meteringBlocks, operations, planRevisions, type Job, type MeteringBlock, type Operation, type PlanRevision } from "./schema";
 import { maySeeJob, type Viewer } from "./visibility";
-
-const approvers = alias(users, "approver");
-const releasers = alias(users, "releaser");
 
 /** What the store keeps of one block in one revision: the sources of its printed traveler. */
 export interface TravelerRecord {
@@ -30,13 +27,15 @@ export interface TravelerRecord {
   };
   snapshot: RevisionSnapshot;
   operations: Operation[];
+  /** The customer's and the tuner's names as the revision keeps them (as they were when it was approved). */
   customer: string;
   tuner: string;
 }
 
 /**
  * The record behind the printed traveler of one block, for one revision (the job's current one by default).
- * The job's figures are the revision's snapshot (what was approved), not the job's working inputs.
+ * The job's figures and the names are the revision's snapshot (what was approved), not the job's working inputs
+ * or today's names.
  * Machinists get travelers only for jobs that reached the shop floor (released or later); tuners and admins
  * get any approved revision. Refuses with 404 when the block, the revision or the block's part in it is
  * missing or when the viewer may not have it (a hidden job is not told apart from a missing one).
@@ -60,13 +59,10 @@ export async function getTravelerRecord(viewer: Viewer, input: { blockId: string
       snapshot: planRevisions.snapshot,
       acknowledgedWarnings: planRevisions.acknowledgedWarnings,
       approvedAt: planRevisions.approvedAt,
-      approvedBy: approvers.name,
       releasedAt: planRevisions.releasedAt,
-      releasedBy: releasers.name,
+      ...revisionNameColumns,
     })
     .from(planRevisions)
-    .innerJoin(approvers, eq(approvers.id, planRevisions.approvedById))
-    .leftJoin(releasers, eq(releasers.id, planRevisions.releasedById))
     .where(and(eq(planRevisions.jobId, found.job.id), eq(planRevisions.number, number)));
   if (!revision) {
     throw new RequestRefusal(404, number === 0 ? "The job has no approved revision yet." : `The job has no revision ${number}.`, "revision");
@@ -82,8 +78,6 @@ export async function getTravelerRecord(viewer: Viewer, input: { blockId: string
   const snapshot = revision.snapshot as RevisionSnapshot;
   const job: Job = { ...found.job, ...(snapshot.job as Partial<Job>) };
   const block = snapshot.blocks.find((b) => b.id === input.blockId) ?? found.block;
-  const [customer] = await db.select({ name: customers.name }).from(customers).where(eq(customers.id, job.customerId));
-  const [tuner] = await db.select({ name: users.name }).from(users).where(eq(users.id, job.tunerId));
 
   return {
     job: { ...job, number: found.job.number },
@@ -101,7 +95,7 @@ export async function getTravelerRecord(viewer: Viewer, input: { blockId: string
     },
     snapshot,
     operations: rows,
-    customer: customer?.name ?? "",
-    tuner: tuner?.name ?? "",
+    customer: revision.customer,
+    tuner: revision.tuner,
   };
 }

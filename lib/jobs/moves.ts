@@ -5,6 +5,7 @@ import { getJob } from "@/db/jobs";
 import type { Viewer } from "@/db/visibility";
 import { changeJobState } from "@/db/revisions";
 import { approveRevision } from "./approve";
+import { revisionOffRackDrills, type MoveWarning } from "./drill-rack-check";
 import { getTravelerData } from "@/lib/traveler/data";
 import { listActiveUsersByRole } from "@/db/users";
 import { benchUrl } from "@/lib/bench/url";
@@ -16,19 +17,22 @@ import { log } from "@/lib/server/log";
 
 /**
  * Moves a job to another state (the one way pages and the API do it) and sends what the move calls for:
- * a release sends every active machinist the block travelers of the released revision.
+ * a release sends every active machinist the block travelers of the released revision. A release goes ahead
+ * when a drill the revision uses has left the rack since approval, and answers with a warning for each.
  */
 export async function moveJob(
   actor: Viewer,
   jobId: string,
   to: JobState,
   options: { acknowledgeWarnings?: boolean | undefined } = {},
-): Promise<{ state: JobState; revision: number }> {
+): Promise<{ state: JobState; revision: number; warnings: MoveWarning[] }> {
   // Reopening a verified job lets signed readings be corrected again: an admin's call, not the tuner's.
   if (to === "machining" && actor.role !== "admin") throw new RequestRefusal(403, "Only an admin reopens a verified job for corrections.", "to");
   const moved = to === "planned" ? { state: to, ...(await approveRevision(actor, jobId, options)) } : await changeJobState(actor, jobId, to);
-  if (moved.state === "released") await sendReleaseNotice(actor, jobId, moved.revision);
-  return moved;
+  if (moved.state !== "released") return { ...moved, warnings: [] };
+  const warnings = await revisionOffRackDrills(jobId, moved.revision);
+  await sendReleaseNotice(actor, jobId, moved.revision);
+  return { ...moved, warnings };
 }
 
 export async function sendReleaseNotice(actor: Viewer, jobId: string, revision: number): Promise<boolean> {

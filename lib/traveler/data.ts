@@ -5,7 +5,7 @@ import { listChangesInto } from "@/db/tuning-logs";
 import { getTravelerRecord } from "@/db/travelers";
 import type { Viewer } from "@/db/visibility";
 import { benchUrl } from "@/lib/bench/url";
-import { fuelSpecOf } from "@/lib/jobs/plan";
+import { fuelSpecOf, snapshotJob } from "@/lib/jobs/plan";
 import { travelerOperations } from "./operations";
 import { travelerPlanNotes } from "./plan-notes";
 import type { TravelerData } from "./types";
@@ -25,16 +25,18 @@ function fuelName(job: Job): string {
 export async function getTravelerData(viewer: Viewer, input: { blockId: string; revision?: number | undefined }): Promise<TravelerData> {
   const record = await getTravelerRecord(viewer, input);
   const { job, block, revision, snapshot } = record;
+  // The engine and fuel printed are the job as approved only: nothing falls through to the working row.
+  const approved = snapshotJob(snapshot.job);
   const accepted = (await listChangesInto(job.id, revision.number)).flatMap((log) => log.changes.map((c) => ({ ...c, fromRevision: log.fromRevision })));
   const ordered = [...accepted.filter((c) => c.side === record.side), ...accepted.filter((c) => c.side !== record.side)];
   return {
     job: {
       number: job.number,
       customer: record.customer,
-      carburetor: job.carburetor,
-      displacementM3: job.displacementM3,
-      fuel: fuelName(job),
-      peakBoostPa: job.peakBoostPa,
+      carburetor: approved.carburetor,
+      displacementM3: approved.displacementM3,
+      fuel: fuelName(approved),
+      peakBoostPa: approved.peakBoostPa,
     },
     block: { id: record.blockId, side: record.side, mainJetDiameterM: block.mainJetDiameterM, mainJetCount: block.mainJetCount },
     revision: {

@@ -89,7 +89,7 @@ describe("GET /api/jobs/{id} and PATCH", () => {
     expect(patched.status).toBe(200);
     expect((await patched.json()).job.state).toBe("draft");
     const approved = await stateRoute(jsonRequest(`/api/jobs/${job.id}/state`, "POST", { to: "planned" }), params(job.id));
-    expect(await approved.json()).toEqual({ state: "planned", revision: 2 });
+    expect(await approved.json()).toEqual({ state: "planned", revision: 2, warnings: [] });
     const revisions = await testDb.select().from(schema.planRevisions).where(eq(schema.planRevisions.jobId, job.id));
     const first = revisions.find((r) => r.number === 1)!;
     expect(first.status).toBe("superseded");

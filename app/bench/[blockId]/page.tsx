@@ -77,6 +77,7 @@ export default async function BenchPage({
           </h1>
           <p className="text-lg font-semibold">{view.job.customer}</p>
           <p className="text-graphite">{view.job.carburetor}</p>
+          {view.job.tuner ? <p className="text-graphite">Tuner: {view.job.tuner}</p> : null}
           <p className="mt-1 text-base">
             Revision <strong className="numeric">{view.revision.number}</strong>
             {superseded ? (

@@ -8,6 +8,7 @@ import { moveJob } from "@/lib/jobs/moves";
 import { JOB_STATE_LABELS } from "@/db/job-states";
 import { jobStateChangeSchema, stageChoiceSchema } from "@/lib/jobs/schema";
 import { requireVisibleJob } from "./job-guard";
+import type { StateMoveData } from "./state-moves";
 
 // The job page's own actions: the tuner's pick among the hole layouts, and the moves between states.
 // Bound to the job's id by the page; the id is checked again here like any other input.
@@ -26,7 +27,7 @@ export async function chooseLayoutAction(jobId: string, _previous: FormResult | 
   });
 }
 
-export async function changeStateAction(jobId: string, _previous: FormResult | undefined, formData: FormData): Promise<FormResult> {
+export async function changeStateAction(jobId: string, _previous: FormResult<StateMoveData> | undefined, formData: FormData): Promise<FormResult<StateMoveData>> {
   return runFormAction(formData, {
     schema: jobStateChangeSchema,
     roles: OFFICE_ROLES,
@@ -36,9 +37,8 @@ export async function changeStateAction(jobId: string, _previous: FormResult | u
       const moved = await moveJob(user, id, value.to, { acknowledgeWarnings: value.acknowledgeWarnings });
       revalidatePath(`/jobs/${id}`);
       revalidatePath("/jobs");
-      return value.to === "planned"
-        ? `Revision ${moved.revision} approved.`
-        : `The job is ${JOB_STATE_LABELS[moved.state].label}.`;
+      const done = value.to === "planned" ? `Revision ${moved.revision} approved.` : `The job is ${JOB_STATE_LABELS[moved.state].label}.`;
+      return { message: [done, ...moved.warnings.map((w) => w.message)].join(" "), data: { warnings: moved.warnings } };
     },
   });
 }

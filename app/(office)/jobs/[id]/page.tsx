@@ -7,6 +7,7 @@ import { ALL_ROLES, OFFICE_ROLES, requireRole } from "@/lib/auth/session";
 import { RequestRefusal } from "@/db/refusal";
 import { EDITING_STATES, JOB_STATE_LABELS } from "@/db/job-states";
 import { parseIdParam } from "@/lib/http/route-params";
+import { offRackDrills } from "@/lib/jobs/drill-rack-check";
 import { shownPlanOf, type ShownPlan } from "@/lib/jobs/plan-shown";
 import { shopTimeZone } from "@/lib/server/env";
 import { ButtonLink } from "@/components/ui/button";
@@ -16,6 +17,7 @@ import { EngineSummary } from "./_plan/engine-summary";
 import { PlanView } from "./_plan/plan-view";
 import { changeStateAction, chooseLayoutAction } from "./actions";
 import { LogsPanel } from "./logs-panel";
+import { OffRackNotice } from "./off-rack-notice";
 import { RevisionsPanel } from "./revisions-panel";
 import { TravelersPanel } from "./travelers-panel";
 import { StateControls } from "./state-controls";
@@ -51,6 +53,9 @@ export default async function JobPage({ params }: Params) {
   const choose = office && editing ? chooseLayoutAction.bind(null, job.id) : undefined;
   const moves = office ? officeMoves(job.state, job.currentRevision + 1, user.role) : [];
   const logs = office ? await listTuningLogs(job.id) : [];
+  // While the bench works from the revision, a drill taken off the rack since approval is said on the page.
+  const onTheBench = job.state === "released" || job.state === "machining";
+  const offRack = onTheBench && shown?.revision ? await offRackDrills(shown.job, shown.plan) : [];
 
   return (
     <>
@@ -95,6 +100,7 @@ export default async function JobPage({ params }: Params) {
             dangers={editing && shown ? shown.plan.warnings.filter((w) => w.level === "danger").length : 0}
           /> : null}
       </div>
+      <OffRackNotice revision={job.currentRevision} warnings={offRack} showRack={office} />
       <div className="mb-8 grid gap-6 lg:grid-cols-[minmax(0,1fr)_32rem]">
         <Sheet title="Engine and fuel">
           <EngineSummary job={job} unit={unit} />

@@ -5,6 +5,7 @@ import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/field";
 import type { FormResult } from "@/lib/forms/form-action";
 import type { JobState } from "@/db/job-states";
+import type { StateMoveData } from "./state-moves";
 
 export interface StateMove {
   to: JobState;
@@ -20,14 +21,16 @@ export function StateControls({
   idle,
   dangers = 0,
 }: {
-  action: (previous: FormResult | undefined, formData: FormData) => Promise<FormResult>;
+  action: (previous: FormResult<StateMoveData> | undefined, formData: FormData) => Promise<FormResult<StateMoveData>>;
   moves: StateMove[];
   /** Said instead of buttons when the office has no move to make from here. */
   idle: string;
   /** Danger warnings in the plan an approval would keep: approving needs an explicit acknowledgement. */
   dangers?: number;
 }) {
-  const { formProps, lastResult: result, pending } = useServerForm(action, { id: "job-state" });
+  const { formProps, lastResult: result, pending, data } = useServerForm(action, { id: "job-state" });
+  // A move that went ahead with warnings (a drill off the rack at release) is said in the warning's colours.
+  const warned = (data?.warnings.length ?? 0) > 0;
   const refused =
     result && result.httpStatus !== 200 ? (result.error?.[""] ?? result.error?.to ?? result.error?.acknowledgeWarnings ?? ["Not done."]) : undefined;
   const approving = moves.some((m) => m.to === "planned");
@@ -50,7 +53,13 @@ export function StateControls({
           </span>
         </label>
       ) : null}
-      <FormMessage errors={refused} success={result?.httpStatus === 200 ? result.message : undefined} />
+      {warned ? (
+        <div role="status" data-testid="move-warnings" className="max-w-sm rounded-[var(--radius-sheet)] border border-fault bg-fault-soft px-3 py-2 text-sm text-fault">
+          {result?.message}
+        </div>
+      ) : (
+        <FormMessage errors={refused} success={result?.httpStatus === 200 ? result.message : undefined} />
+      )}
     </form>
   );
 }

@@ -1,6 +1,12 @@
 import type { JobState } from "@/db/job-states";
 import type { UserRole } from "@/db/schema";
+import type { MoveWarning } from "@/lib/jobs/drill-rack-check";
 import type { StateMove } from "./state-controls";
+
+/** What a move answers beside its message: the warnings it went ahead with (a drill off the rack at release). */
+export interface StateMoveData {
+  warnings: MoveWarning[];
+}
 
 /** The moves the office makes from the job page; the bench moves a job into and out of machining itself. */
 export function officeMoves(state: JobState, nextRevision: number, role: UserRole): StateMove[] {

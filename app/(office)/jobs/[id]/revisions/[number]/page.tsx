@@ -26,13 +26,14 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
   const revision = await getRevisionSnapshot(parsed.id, revisionNumber);
   const listed = record.revisions.find((r) => r.number === revisionNumber);
   if (!revision || !listed) notFound();
-  const { snapshot } = revision;
+  // Everything below is the revision's own record, names included: a later rename does not reach it.
+  const { snapshot, names } = revision;
   const superseded = revision.status === "superseded";
   const current = record.revisions.find((r) => r.status === "current");
   return (
     <>
       <PageHeader
-        kicker={`Job ${record.job.number} · ${record.customer.name}`}
+        kicker={`Job ${record.job.number} · ${names.customer}`}
         title={
           <span className="flex flex-wrap items-center gap-3">
             <span>Revision {revisionNumber}</span>
@@ -70,14 +71,24 @@ export default async function RevisionPage({ params }: { params: Promise<{ id: s
         </Sheet>
         <Sheet title="Approval">
           <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
+            <dt className="text-graphite">Customer</dt>
+            <dd className="font-semibold">{names.customer}</dd>
+            <dt className="text-graphite">Tuner</dt>
+            <dd className="font-semibold">{names.tuner}</dd>
             <dt className="text-graphite">Carburetor</dt>
             <dd className="font-semibold">{String(snapshot.job.carburetor ?? "")}</dd>
             <dt className="text-graphite">Approved by</dt>
-            <dd className="font-semibold">{listed.approvedBy}</dd>
+            <dd className="font-semibold">{names.approvedBy}</dd>
             <dt className="text-graphite">Approved at</dt>
             <dd className="numeric">{formatDateTime(listed.approvedAt, shopTimeZone())}</dd>
             <dt className="text-graphite">Released at</dt>
             <dd className="numeric">{listed.releasedAt ? formatDateTime(listed.releasedAt, shopTimeZone()) : "not released"}</dd>
+            {names.releasedBy ? (
+              <>
+                <dt className="text-graphite">Released by</dt>
+                <dd className="font-semibold">{names.releasedBy}</dd>
+              </>
+            ) : null}
           </dl>
         </Sheet>
       </div>
