@@ -6,44 +6,22 @@ import { fileURLToPath } from "node:url";
 import { expect, test } from "@playwright/test";
 import { screenshotPath } from "./support/accounts";
 import { openSignedIn } from "./support/sessions";
-import { JobPage, newJobBody } from "./support/planner";
+import { demoBlocksBody, demoJobBody } from "../support/job-fixtures";
+import { JobPage } from "./support/planner";
 
 // Back from the dyno: a released job's log is read, mapped and judged against the plan; the tuner carries
 // the correction into revision 2, whose traveler lists it, while revision 1 reads as superseded at the bench.
 
 const FIXTURE = fileURLToPath(new URL("./fixtures/dyno-pull.csv", import.meta.url));
 
-const BLOCKS = {
-  blocks: [
-    {
-      side: "primary",
-      mainJetDiameter: { value: 0.076, unit: "in" },
-      mainJetCount: 2,
-      channelLength: { value: 0.3, unit: "in" },
-      minWeb: { value: 0.03, unit: "in" },
-      stages: [
-        { valveKind: "vacuum", vacuumRating: { value: 6.5, unit: "inHg" }, targetKind: "percentMainJet", targetTo: 12, maxHoles: 4 },
-        { valveKind: "boost", setpoint: { value: 3, unit: "psi" }, targetKind: "afr", mode: "full", targetFrom: 13.8, targetTo: 12.0, maxHoles: 4 },
-      ],
-    },
-    {
-      side: "secondary",
-      mainJetDiameter: { value: 0.086, unit: "in" },
-      mainJetCount: 2,
-      channelLength: { value: 0.3, unit: "in" },
-      stages: [{ valveKind: "boost", setpoint: { value: 7, unit: "psi" }, targetKind: "lambda", targetFrom: 0.86, targetTo: 0.78, maxHoles: 4 }],
-    },
-  ],
-};
-
 test("a tuner reads a dyno log, accepts its correction, and releases revision 2 with the change on its traveler", async ({ page }) => {
   test.setTimeout(240_000);
   await openSignedIn(page, "tuner");
   const customer = `Tamsin Okonkwo ${Date.now().toString(36).slice(-4).toUpperCase()}`;
-  const created = await page.request.post("/api/jobs", { data: newJobBody(customer) });
+  const created = await page.request.post("/api/jobs", { data: demoJobBody({ newCustomerName: customer }) });
   expect(created.status()).toBe(201);
   const jobId = ((await created.json()) as { job: { id: string } }).job.id;
-  expect((await page.request.patch(`/api/jobs/${jobId}`, { data: BLOCKS })).status()).toBe(200);
+  expect((await page.request.patch(`/api/jobs/${jobId}`, { data: demoBlocksBody() })).status()).toBe(200);
   expect((await page.request.post(`/api/jobs/${jobId}/state`, { data: { to: "planned", acknowledgeWarnings: true } })).status()).toBe(200);
   expect((await page.request.post(`/api/jobs/${jobId}/state`, { data: { to: "released" } })).status()).toBe(200);
   const blocks = ((await (await page.request.get(`/api/jobs/${jobId}`)).json()) as { job: { blocks: { id: string; side: string }[] } }).job.blocks;

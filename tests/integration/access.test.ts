@@ -61,6 +61,16 @@ async function machinistId(): Promise<string> {
   return row!.id;
 }
 
+/** The finish operation (no readings) of a freshly released job. */
+async function finishOperationOfReleasedJob(): Promise<string> {
+  const job = await makeJob("released");
+  const [op] = await testDb
+    .select({ id: schema.operations.id })
+    .from(schema.operations)
+    .where(sql`${schema.operations.blockId} in (select id from metering_blocks where job_id = ${job.id}) and ${schema.operations.kind} = 'finish'`);
+  return op!.id;
+}
+
 interface AccessCase {
   name: string;
   expected: Record<Actor, number>;
@@ -128,14 +138,7 @@ const CASES: AccessCase[] = [
   {
     name: "POST /api/operations/{id}/sign-off (released job)",
     expected: EVERYONE(201),
-    setup: async () => {
-      const job = await makeJob("released");
-      const [op] = await testDb
-        .select({ id: schema.operations.id })
-        .from(schema.operations)
-        .where(sql`${schema.operations.blockId} in (select id from metering_blocks where job_id = ${job.id}) and ${schema.operations.kind} = 'finish'`);
-      return op!.id;
-    },
+    setup: finishOperationOfReleasedJob,
     call: async (id) => (await signOffRoute(jsonRequest(`/api/operations/${id}/sign-off`, "POST", { readings: [] }), jobParams(id))).status,
   },
   {
@@ -156,14 +159,7 @@ const CASES: AccessCase[] = [
   {
     name: "action signOffAction (released job)",
     expected: EVERYONE(200),
-    setup: async () => {
-      const job = await makeJob("released");
-      const [op] = await testDb
-        .select({ id: schema.operations.id })
-        .from(schema.operations)
-        .where(sql`${schema.operations.blockId} in (select id from metering_blocks where job_id = ${job.id}) and ${schema.operations.kind} = 'finish'`);
-      return op!.id;
-    },
+    setup: finishOperationOfReleasedJob,
     call: async (id) => (await signOffAction(undefined, formData({ operationId: id, note: "" }))).httpStatus,
   },
   {
@@ -398,28 +394,14 @@ const CASES: AccessCase[] = [
   {
     name: "PATCH /api/operations/{id}/sign-off (not signed yet)",
     expected: EVERYONE(409),
-    setup: async () => {
-      const job = await makeJob("released");
-      const [op] = await testDb
-        .select({ id: schema.operations.id })
-        .from(schema.operations)
-        .where(sql`${schema.operations.blockId} in (select id from metering_blocks where job_id = ${job.id}) and ${schema.operations.kind} = 'finish'`);
-      return op!.id;
-    },
+    setup: finishOperationOfReleasedJob,
     call: async (id) =>
       (await amendRoute(jsonRequest(`/api/operations/${id}/sign-off`, "PATCH", { readings: [{ key: "x", value: 1, unit: "in" }], reason: "A slip" }), jobParams(id))).status,
   },
   {
     name: "action amendAction (not signed yet)",
     expected: EVERYONE(409),
-    setup: async () => {
-      const job = await makeJob("released");
-      const [op] = await testDb
-        .select({ id: schema.operations.id })
-        .from(schema.operations)
-        .where(sql`${schema.operations.blockId} in (select id from metering_blocks where job_id = ${job.id}) and ${schema.operations.kind} = 'finish'`);
-      return op!.id;
-    },
+    setup: finishOperationOfReleasedJob,
     call: async (id) =>
       (await amendAction(undefined, nestedFormData({ operationId: id, reason: "A slip", readings: [{ key: "x", value: "1", unit: "in" }] }))).httpStatus,
   },

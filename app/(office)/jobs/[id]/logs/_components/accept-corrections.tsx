@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
+import { failureOf } from "./api-failure";
 import { FormMessage } from "@/components/ui/field";
 
 export interface AcceptableCorrection {
@@ -33,11 +34,7 @@ export function AcceptCorrections({ jobId, logId, corrections, nextRevision }: {
       return;
     }
     setBusy(false);
-    try {
-      setError(((await response.json()) as { error: { message: string } }).error.message);
-    } catch {
-      setError(`The server answered ${response.status}.`);
-    }
+    setError((await failureOf(response)).message);
   }
 
   return (

@@ -5,6 +5,7 @@ import { useId, useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Input, Select } from "@/components/ui/field";
 import { Table, Td, Th } from "@/components/ui/table";
+import { failureOf, type ApiFailure } from "./api-failure";
 
 // The mapping step: the file's columns and first rows come back from the server (it detects the delimiter and
 // a decimal comma), the tuner says which column is what, and the file goes up with that mapping.
@@ -22,10 +23,6 @@ interface Mapping {
   mixture: { column: string; kind: "lambda" | "afr"; scale?: "fuel" | "gasoline" };
   rpm?: { column: string };
   throttle?: { column: string };
-}
-
-interface ApiFailure {
-  error: { message: string; field?: string; issues?: { field: string; message: string }[] };
 }
 
 const PRESSURE_UNITS = ["kPa", "psi", "bar", "inHg"] as const;
@@ -47,17 +44,6 @@ function guess(headers: string[]): Mapping {
   };
 }
 
-async function failureOf(response: Response): Promise<{ message: string; fields: Record<string, string> }> {
-  try {
-    const body = (await response.json()) as ApiFailure;
-    const fields: Record<string, string> = {};
-    for (const issue of body.error.issues ?? (body.error.field ? [{ field: body.error.field, message: body.error.message }] : [])) fields[issue.field] = issue.message;
-    return { message: body.error.message, fields };
-  } catch {
-    return { message: `The server answered ${response.status}.`, fields: {} };
-  }
-}
-
 export function LogUpload({ jobId, revision }: { jobId: string; revision: number }) {
   const router = useRouter();
   const id = useId();
@@ -65,7 +51,7 @@ export function LogUpload({ jobId, revision }: { jobId: string; revision: number
   const [preview, setPreview] = useState<Preview | null>(null);
   const [mapping, setMapping] = useState<Mapping | null>(null);
   const [busy, setBusy] = useState(false);
-  const [failure, setFailure] = useState<{ message: string; fields: Record<string, string> } | null>(null);
+  const [failure, setFailure] = useState<ApiFailure | null>(null);
 
   async function readColumns(chosen: File | null) {
     setFile(chosen);

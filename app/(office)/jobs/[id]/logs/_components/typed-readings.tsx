@@ -5,6 +5,7 @@ import { useId, useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage, Input, Select } from "@/components/ui/field";
 import { Table, Td, Th } from "@/components/ui/table";
+import { failureOf } from "./api-failure";
 
 // A few readings typed from the dyno sheet, read exactly like a logger's file: the table becomes a small CSV
 // with its mapping, so the server checks and analyses it the one way it reads every log.
@@ -64,11 +65,7 @@ export function TypedReadings({ jobId }: { jobId: string }) {
       return;
     }
     setBusy(false);
-    try {
-      setError(((await response.json()) as { error: { message: string } }).error.message);
-    } catch {
-      setError(`The server answered ${response.status}.`);
-    }
+    setError((await failureOf(response)).message);
   }
 
   const update = (i: number, key: keyof Row, value: string) => setRows(rows.map((r, j) => (j === i ? { ...r, [key]: value } : r)));
