@@ -101,7 +101,7 @@ export default async function LogPage({ params }: { params: Promise<{ id: string
               {formatDateTime(log.uploadedAt, shopTimeZone())}
             </dd>
             <dt className="text-graphite">Rows</dt>
-            <dd className="numeric" data-testid="log-counts">
+            <dd className="whitespace-normal" data-testid="log-counts">
               {log.totalRows} rows: {log.usedRows} used, {setAside.fastThrottle + setAside.cold} set aside ({setAside.fastThrottle} during fast throttle movement, {setAside.cold} on a cold engine), {log.rejectedCount} refused
               {setAside.blank || setAside.repeated ? `; ${setAside.blank ?? 0} blank and ${setAside.repeated ?? 0} repeated rows skipped` : ""}
             </dd>
