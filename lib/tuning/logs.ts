@@ -9,6 +9,7 @@ import { DEFAULT_FULL_THROTTLE_ABOVE_PCT } from "@/lib/engineering/steady-readin
 import { DEFAULT_BIN_WIDTH_PA } from "@/lib/engineering/log-bins";
 import { listStockedDrills } from "@/db/drill-stock";
 import { getJob } from "@/db/jobs";
+import type { JobState } from "@/db/job-states";
 import { RequestRefusal } from "@/db/refusal";
 import { getRevisionSnapshot } from "@/db/revisions";
 import { getLogSettings, getShopSettings } from "@/db/shop-settings";
@@ -22,7 +23,8 @@ import { columnIndex, LOG_PRESSURE_UNITS, previewLog, readLog, type LogMapping, 
 /** Logs of a few hundred thousand rows are a few MB; anything far larger is not a wideband log. */
 export const MAX_LOG_BYTES = 32 * 1024 * 1024;
 const REJECTED_KEPT = 1000;
-const LOGGABLE_STATES = ["released", "machining", "verified", "delivered"] as const;
+/** A log is read against a revision that reached the engine: released or later, not while the plan is being revised. */
+export const LOGGABLE_STATES: readonly JobState[] = ["released", "machining", "verified", "delivered"];
 
 export const logMappingSchema = z.object({
   pressure: z.object({
@@ -51,7 +53,7 @@ export function headerKey(headers: readonly string[]): string {
 async function loggableJob(viewer: Viewer, jobId: string) {
   const record = await getJob(viewer, jobId);
   if (!record) throw new RequestRefusal(404, "No such job.");
-  if (!(LOGGABLE_STATES as readonly string[]).includes(record.job.state) || record.job.currentRevision === 0) {
+  if (!LOGGABLE_STATES.includes(record.job.state) || record.job.currentRevision === 0) {
     throw new RequestRefusal(409, `A ${record.job.state} job has no revision on the engine yet: logs are read once a revision is released.`, "file");
   }
   return record;

@@ -2,7 +2,6 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { getJob } from "@/db/jobs";
 import { listTuningLogs } from "@/db/tuning-logs";
-import { SHOP_FLOOR_STATES } from "@/db/visibility";
 import { ALL_ROLES, OFFICE_ROLES, requireRole } from "@/lib/auth/session";
 import { RequestRefusal } from "@/db/refusal";
 import { EDITING_STATES, JOB_STATE_LABELS } from "@/db/job-states";
@@ -16,6 +15,7 @@ import { BlockList } from "./_plan/block-list";
 import { EngineSummary } from "./_plan/engine-summary";
 import { PlanView } from "./_plan/plan-view";
 import { changeStateAction, chooseLayoutAction } from "./actions";
+import { LOGGABLE_STATES } from "@/lib/tuning/logs";
 import { LogsPanel } from "./logs-panel";
 import { OffRackNotice } from "./off-rack-notice";
 import { RevisionsPanel } from "./revisions-panel";
@@ -108,7 +108,7 @@ export default async function JobPage({ params }: Params) {
         <div className="flex flex-col gap-6">
           <RevisionsPanel jobId={job.id} revisions={record.revisions} timeZone={shopTimeZone()} />
           {office && job.currentRevision > 0 ? (
-            <LogsPanel jobId={job.id} logs={logs} canRead={SHOP_FLOOR_STATES.includes(job.state)} timeZone={shopTimeZone()} />
+            <LogsPanel jobId={job.id} logs={logs} canRead={LOGGABLE_STATES.includes(job.state)} timeZone={shopTimeZone()} />
           ) : null}
           {job.currentRevision > 0 && record.blocks.length ? (
             <TravelersPanel revision={job.currentRevision} blocks={record.blocks.map((b) => ({ id: b.id, side: b.side }))} />

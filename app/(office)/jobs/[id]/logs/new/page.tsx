@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { getJob } from "@/db/jobs";
-import { SHOP_FLOOR_STATES } from "@/db/visibility";
+import { LOGGABLE_STATES } from "@/lib/tuning/logs";
 import { OFFICE_ROLES, requireRole } from "@/lib/auth/session";
 import { parseIdParam } from "@/lib/http/route-params";
 import { ButtonLink } from "@/components/ui/button";
@@ -19,7 +19,7 @@ export default async function NewLogPage({ params }: { params: Promise<{ id: str
   const record = await getJob(user, parsed.id);
   if (!record) notFound();
   const { job } = record;
-  const onEngine = SHOP_FLOOR_STATES.includes(job.state) && job.currentRevision > 0;
+  const onEngine = LOGGABLE_STATES.includes(job.state) && job.currentRevision > 0;
   return (
     <>
       <PageHeader
