@@ -79,7 +79,8 @@ export function binReadings(readings: readonly ModeReading[], options: BinOption
 
   const groups = new Map<string, { mode: ThrottleMode; fromPa: number; toPa: number; readings: ModeReading[] }>();
   for (const reading of readings) {
-    const p = requireFinite(`line ${reading.line} gaugePa`, reading.gaugePa);
+    // Checked before any message is built: a long log has hundreds of thousands of readings.
+    const p = Number.isFinite(reading.gaugePa) ? reading.gaugePa : requireFinite(`line ${reading.line} gaugePa`, reading.gaugePa);
     const cell = Math.floor(p / width);
     let fromPa = cell * width;
     let toPa = (cell + 1) * width;
