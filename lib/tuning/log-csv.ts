@@ -18,6 +18,10 @@ export interface LogMapping {
   mixture: { column: string; kind: "lambda" | "afr"; scale?: "fuel" | "gasoline" | undefined };
   rpm?: { column: string } | undefined;
   throttle?: { column: string } | undefined;
+  /** Seconds from the start: with the throttle column it tells fast throttle movement from steady running. */
+  time?: { column: string } | undefined;
+  /** Coolant temperature: readings on a cold engine are set aside. */
+  coolant?: { column: string; unit: "°C" | "°F" } | undefined;
 }
 
 export interface LogDialect {
@@ -94,7 +98,7 @@ export interface LogReadResult {
 }
 
 /** Checks that every mapped column is in the header; the message names the mapping field. */
-export function columnIndex(headers: readonly string[], mapping: LogMapping): Record<"pressure" | "mixture" | "rpm" | "throttle", number | undefined> {
+export function columnIndex(headers: readonly string[], mapping: LogMapping): Record<"pressure" | "mixture" | "rpm" | "throttle" | "time" | "coolant", number | undefined> {
   const find = (field: string, column: string | undefined): number | undefined => {
     if (column === undefined) return undefined;
     const index = headers.findIndex((h) => h.trim() === column.trim());
@@ -106,6 +110,8 @@ export function columnIndex(headers: readonly string[], mapping: LogMapping): Re
     mixture: find("mixture", mapping.mixture.column),
     rpm: find("rpm", mapping.rpm?.column),
     throttle: find("throttle", mapping.throttle?.column),
+    time: find("time", mapping.time?.column),
+    coolant: find("coolant", mapping.coolant?.column),
   };
 }
 
@@ -144,6 +150,8 @@ export async function readLog(input: Readable, dialect: LogDialect, mapping: Log
     const mixture = cell(index.mixture) as number;
     const rpm = cell(index.rpm);
     const throttle = cell(index.throttle);
+    const time = cell(index.time);
+    const coolant = cell(index.coolant);
     const problems: string[] = [];
     if (!Number.isFinite(pressure)) problems.push(`${mapping.pressure.column}: "${record[index.pressure as number] ?? ""}" is not a number`);
     if (!Number.isFinite(mixture)) problems.push(`${mapping.mixture.column}: "${record[index.mixture as number] ?? ""}" is not a number`);
@@ -151,6 +159,8 @@ export async function readLog(input: Readable, dialect: LogDialect, mapping: Log
     if (throttle !== undefined && !Number.isFinite(throttle)) {
       problems.push(`${mapping.throttle!.column}: "${record[index.throttle as number] ?? ""}" is not a number`);
     }
+    if (time !== undefined && !Number.isFinite(time)) problems.push(`${mapping.time!.column}: "${record[index.time as number] ?? ""}" is not a number`);
+    if (coolant !== undefined && !Number.isFinite(coolant)) problems.push(`${mapping.coolant!.column}: "${record[index.coolant as number] ?? ""}" is not a number`);
     if (problems.length) {
       result.rejected.push({ line, reason: problems.join("; ") });
       continue;
@@ -161,6 +171,8 @@ export async function readLog(input: Readable, dialect: LogDialect, mapping: Log
       mixture: scale === undefined ? { kind: "lambda", value: mixture } : { kind: "afr", value: mixture, scale },
       rpm,
       throttlePct: throttle,
+      timeS: time,
+      coolantK: coolant === undefined ? undefined : toSI("temperature", coolant, mapping.coolant!.unit),
     });
   }
   if (!index) throw new RangeError("file: the log has no header row");

@@ -39,6 +39,13 @@ export const logMappingSchema = z.object({
   }),
   rpm: z.object({ column: z.string().min(1, { error: "choose the rpm column, or leave it out" }) }).optional(),
   throttle: z.object({ column: z.string().min(1, { error: "choose the throttle column, or leave it out" }) }).optional(),
+  time: z.object({ column: z.string().min(1, { error: "choose the time column, or leave it out" }) }).optional(),
+  coolant: z
+    .object({
+      column: z.string().min(1, { error: "choose the coolant temperature column, or leave it out" }),
+      unit: z.enum(["°C", "°F"], { error: 'unit must be "°C" or "°F"' }),
+    })
+    .optional(),
 }).refine((m) => m.mixture.kind !== "afr" || m.mixture.scale !== undefined, {
   error: 'say whether the AFR is on the fuel\'s own scale ("fuel") or gasoline-scaled ("gasoline")',
   path: ["mixture", "scale"],

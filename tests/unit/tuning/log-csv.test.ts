@@ -26,6 +26,16 @@ describe("a logger's CSV", () => {
     expect(log.rejected).toEqual([]);
   });
 
+  it("reads the time and a coolant temperature when they are mapped", async () => {
+    const text = "Time (s),MAP [kPa],Lambda,TPS %,ECT (F)\n0.0,101.3,0.98,12,100\n0.5,150.0,0.80,95,194\n";
+    const log = await readLog(from(text), previewLog(text), { ...kpaLambda, time: { column: "Time (s)" }, coolant: { column: "ECT (F)", unit: "°F" } });
+    // Kelvin from Fahrenheit (NIST SP 811, B.9): (F - 32) x 5/9 + 273.15; 100 °F = 37.78 + 273.15 = 310.93 K,
+    // 194 °F = 90 + 273.15 = 363.15 K.
+    expect(log.rows.map((r) => r.timeS)).toEqual([0, 0.5]);
+    expect(log.rows[0]!.coolantK).toBeCloseTo(310.93, 2);
+    expect(log.rows[1]!.coolantK).toBeCloseTo(363.15, 6);
+  });
+
   it("reads semicolons with decimal commas", async () => {
     const text = "Boost (psi);AFR;TPS\n5,5;11,8;80\n-2,0;14,1;20\n";
     const preview = previewLog(text);

@@ -23,6 +23,8 @@ interface Mapping {
   mixture: { column: string; kind: "lambda" | "afr"; scale?: "fuel" | "gasoline" };
   rpm?: { column: string };
   throttle?: { column: string };
+  time?: { column: string };
+  coolant?: { column: string; unit: "°C" | "°F" };
 }
 
 const PRESSURE_UNITS = ["kPa", "psi", "bar", "inHg"] as const;
@@ -36,11 +38,15 @@ function guess(headers: string[]): Mapping {
   const afr = find(/afr|a\/f/i);
   const rpm = find(/rpm|engine speed/i);
   const throttle = find(/tps|throttle/i);
+  const time = find(/^time|seconds|\(s\)/i);
+  const coolant = find(/coolant|ect|water temp/i);
   return {
     pressure: { column: pressure, unit, reference: unit === "kPa" || unit === "bar" ? "absolute" : "gauge" },
     mixture: lambda ? { column: lambda, kind: "lambda" } : { column: afr, kind: "afr", scale: /gas/i.test(afr) ? "gasoline" : "fuel" },
     ...(rpm ? { rpm: { column: rpm } } : {}),
     ...(throttle ? { throttle: { column: throttle } } : {}),
+    ...(time ? { time: { column: time } } : {}),
+    ...(coolant ? { coolant: { column: coolant, unit: /f\b|°f/i.test(coolant) ? "°F" : "°C" } } : {}),
   };
 }
 
@@ -185,6 +191,33 @@ export function LogUpload({ jobId, revision }: { jobId: string; revision: number
           </fieldset>
           <fieldset className="grid gap-4 sm:grid-cols-2">
             <legend className="mb-2 text-sm font-bold">Optional columns</legend>
+            <Field label="Time (s)" htmlFor={`${id}-time`} errors={err("mapping.time.column")} hint="With the throttle column: readings during fast throttle movement are set aside.">
+              <Select id={`${id}-time`} value={mapping.time?.column ?? ""} onChange={(e) => setMapping({ ...mapping, time: e.target.value ? { column: e.target.value } : undefined })}>
+                {columnOptions(true)}
+              </Select>
+            </Field>
+            <Field label="Coolant temperature" htmlFor={`${id}-ect`} errors={err("mapping.coolant.column")} hint="Readings on a cold engine are set aside.">
+              <div className="flex gap-2">
+                <Select
+                  id={`${id}-ect`}
+                  value={mapping.coolant?.column ?? ""}
+                  onChange={(e) => setMapping({ ...mapping, coolant: e.target.value ? { column: e.target.value, unit: mapping.coolant?.unit ?? "°C" } : undefined })}
+                >
+                  {columnOptions(true)}
+                </Select>
+                {mapping.coolant ? (
+                  <Select
+                    aria-label="Coolant temperature unit"
+                    className="w-24"
+                    value={mapping.coolant.unit}
+                    onChange={(e) => setMapping({ ...mapping, coolant: { column: mapping.coolant!.column, unit: e.target.value as "°C" | "°F" } })}
+                  >
+                    <option value="°C">°C</option>
+                    <option value="°F">°F</option>
+                  </Select>
+                ) : null}
+              </div>
+            </Field>
             <Field label="Engine speed (rpm)" htmlFor={`${id}-r`} errors={err("mapping.rpm.column")}>
               <Select id={`${id}-r`} value={mapping.rpm?.column ?? ""} onChange={(e) => setMapping({ ...mapping, rpm: e.target.value ? { column: e.target.value } : undefined })}>
                 {columnOptions(true)}
