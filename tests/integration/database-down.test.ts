@@ -10,6 +10,7 @@ import { resetPasswordAction } from "@/app/(auth)/reset-password/actions";
 import OfficeLayout from "@/app/(office)/layout";
 import BenchLayout from "@/app/bench/layout";
 import { closeDb } from "@/db/client";
+import { authOptions } from "@/lib/auth/options";
 import { setSessionUserId } from "./support/session-double";
 
 const MESSAGE = "The shop's database is not answering; try again shortly.";
@@ -67,6 +68,13 @@ describe("with the database refusing connections", () => {
     const result = await resetPasswordAction(undefined, reset);
     expect(result.httpStatus).toBe(503);
     expect(result.error?.[""]).toEqual([MESSAGE]);
+  });
+
+  it("signing in says the database is not answering, not what the failed query was", async () => {
+    // next-auth keeps the provider's own authorize beside its defaults, in `options`.
+    const provider = authOptions.providers[0] as unknown as { options: { authorize: (raw: unknown, req: unknown) => Promise<unknown> } };
+    const signIn = provider.options.authorize({ email: "tuner@blockwright.test", password: "blockwright-demo" }, { headers: {} });
+    await expect(signIn).rejects.toThrow(new Error(MESSAGE));
   });
 
   it("the office and bench layouts show why the page is not there instead of the page", async () => {
