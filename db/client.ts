@@ -1,6 +1,6 @@
 import "server-only";
 import { drizzle, type NodePgDatabase } from "drizzle-orm/node-postgres";
-import { Pool } from "pg";
+import { Client, Pool, type ClientConfig } from "pg";
 import * as schema from "./schema";
 
 export type Database = NodePgDatabase<typeof schema>;
@@ -19,6 +19,16 @@ function databaseUrl(): string {
 
 /** A connection not made in this long fails (503 for the request) instead of making the request wait. */
 const CONNECT_TIMEOUT_MS = 3000;
+
+/**
+ * The connect timeout set on each connection rather than on the pool: the pool's own would also end a request
+ * that only waits its turn for a busy connection, turning a burst of load into 503s.
+ */
+class TimedClient extends Client {
+  constructor(config?: string | ClientConfig) {
+    super({ ...(typeof config === "string" ? { connectionString: config } : config), connectionTimeoutMillis: CONNECT_TIMEOUT_MS });
+  }
+}
 /** No statement of the app's runs near this long; one that does holds a connection others are waiting for. */
 const STATEMENT_TIMEOUT_MS = 30_000;
 
@@ -31,7 +41,7 @@ function openPool(): Pool {
   const opened = new Pool({
     connectionString: databaseUrl(),
     max: 10,
-    connectionTimeoutMillis: CONNECT_TIMEOUT_MS,
+    Client: TimedClient,
     statement_timeout: STATEMENT_TIMEOUT_MS,
   });
   // Every connection reports its own loss (below); the pool repeats it for idle ones, heard here so it cannot crash.

@@ -20,6 +20,7 @@ const UNAVAILABLE_SOCKET_CODES = new Set(["ECONNREFUSED", "ECONNRESET", "ETIMEDO
 const UNAVAILABLE_MESSAGES = [
   "Connection terminated",
   "timeout exceeded when trying to connect",
+  "timeout expired", // a connection's own connect timeout (db/client.ts sets one)
   "Client has encountered a connection error and is not queryable",
 ];
 

@@ -40,6 +40,7 @@ describe("isDatabaseUnavailable", () => {
     "Connection terminated unexpectedly",
     "Connection terminated due to connection timeout",
     "timeout exceeded when trying to connect",
+    "timeout expired",
   ])("node-postgres's \"%s\" is the database not answering", (message) => {
     expect(isDatabaseUnavailable(new Error(message))).toBe(true);
   });
