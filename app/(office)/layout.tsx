@@ -1,12 +1,15 @@
 import Link from "next/link";
 import { redirect } from "next/navigation";
-import { getSessionUser } from "@/lib/auth/session";
+import { getSessionUserOrDatabaseDown } from "@/lib/auth/session";
+import { DatabaseDownPanel } from "@/components/ui/database-down-panel";
 import { navigationFor } from "@/components/navigation";
 import { SignOutButton } from "@/components/sign-out-button";
 import { QueryProvider } from "@/components/query-provider";
 
 export default async function OfficeLayout({ children }: { children: React.ReactNode }) {
-  const user = await getSessionUser();
+  const user = await getSessionUserOrDatabaseDown();
+  // Without the database nobody's role is known: no header or navigation, only why the page is not there.
+  if (user === "database-down") return <DatabaseDownPanel />;
   if (!user) redirect("/sign-in");
   const links = navigationFor(user.role);
   return (

@@ -3,6 +3,7 @@ import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { z } from "zod";
 import { endSessions } from "@/db/users";
+import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "@/db/faults";
 import { safeCallbackPath } from "@/lib/http/safe-callback";
 import { getEnv } from "@/lib/server/env";
 import { clientAddress } from "./client-address";
@@ -30,6 +31,8 @@ export const authOptions: NextAuthOptions = {
           return await verifyCredentials({ ...parsed.data, address: clientAddress(req?.headers, getEnv().TRUSTED_PROXY) });
         } catch (error) {
           if (error instanceof SignInRefused) throw new Error(error.message);
+          // next-auth hands a thrown message to the sign-in form as it is: never the failed query's text.
+          if (isDatabaseUnavailable(error)) throw new Error(DATABASE_UNAVAILABLE_MESSAGE);
           throw error;
         }
       },

@@ -2,6 +2,7 @@ import "server-only";
 import { getServerSession } from "next-auth";
 import { forbidden, redirect } from "next/navigation";
 import { getSessionHolder, type UserSummary } from "@/db/users";
+import { isDatabaseUnavailable } from "@/db/faults";
 import type { UserRole } from "@/db/schema";
 
 // The roles as the layers above the data layer name them.
@@ -20,6 +21,19 @@ export async function getSessionUser(): Promise<SessionUser | null> {
   // A token without a version predates session versions, or was forged without one: not a session.
   if (!userId || typeof session.sessionVersion !== "number") return null;
   return (await getSessionHolder(userId, session.sessionVersion)) ?? null;
+}
+
+/**
+ * For layouts: the session user (or null), or "database-down" while the database is not answering, so the layout
+ * can say so instead of failing into the error page, whose message production hides.
+ */
+export async function getSessionUserOrDatabaseDown(): Promise<SessionUser | null | "database-down"> {
+  try {
+    return await getSessionUser();
+  } catch (error) {
+    if (isDatabaseUnavailable(error)) return "database-down";
+    throw error;
+  }
 }
 
 export type AccessCheck =

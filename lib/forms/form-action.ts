@@ -6,6 +6,7 @@ import type { UserRole } from "@/db/schema";
 import { checkRole, type SessionUser } from "@/lib/auth/session";
 import { unstable_rethrow } from "next/navigation";
 import { RequestRefusal } from "@/db/refusal";
+import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "@/db/faults";
 import { log } from "@/lib/server/log";
 import { CONTROL_CHARACTER_MESSAGE, findControlCharacterInForm } from "@/lib/http/control-characters";
 
@@ -40,7 +41,14 @@ export async function runFormAction<Schema extends z.ZodType, Data = never, Role
   // Who is asking comes first: an anonymous or wrong-role caller learns nothing about the fields.
   let user: SessionUser | null = null;
   if (options.roles !== "public") {
-    const access = await checkRole(options.roles);
+    let access: Awaited<ReturnType<typeof checkRole>>;
+    try {
+      access = await checkRole(options.roles);
+    } catch (error) {
+      // The role is read from the database: while it is not answering, nobody's role can be checked.
+      if (isDatabaseUnavailable(error)) return databaseUnavailable(error);
+      throw error;
+    }
     if (!access.ok) return { status: "error", error: { "": [access.message] }, httpStatus: access.status };
     user = access.user;
   }
@@ -68,8 +76,16 @@ export async function runFormAction<Schema extends z.ZodType, Data = never, Role
     }
     // redirect() and notFound() are Next's own signals, not failures.
     unstable_rethrow(error);
+    // The entered values come back with the message: nothing was saved, and the same submission may be sent again.
+    if (isDatabaseUnavailable(error)) return { ...submission.reply({ formErrors: [DATABASE_UNAVAILABLE_MESSAGE] }), ...databaseUnavailable(error) };
     // Logged here, redacted, rather than by Next, which would print the query's parameters.
     log.error({ err: error }, "form action failed");
     return { ...submission.reply({ formErrors: ["Something went wrong on the server."] }), httpStatus: 500 };
   }
+}
+
+/** The answer while the database is not answering (503): logged as a warning, not as a fault of the code. */
+function databaseUnavailable(error: unknown): { status: "error"; error: Record<string, string[]>; httpStatus: 503 } {
+  log.warn({ err: error }, "form action: database not answering");
+  return { status: "error", error: { "": [DATABASE_UNAVAILABLE_MESSAGE] }, httpStatus: 503 };
 }

@@ -5,6 +5,7 @@ import type { UserRole } from "@/db/schema";
 import { checkRole, type SessionUser } from "@/lib/auth/session";
 import { getEnv } from "@/lib/server/env";
 import { RequestRefusal, type UnprocessableCode } from "@/db/refusal";
+import { DATABASE_RETRY_AFTER_S, DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "@/db/faults";
 import { BodyTooLarge, readLimitedForm, readLimitedText } from "@/lib/http/body-limit";
 import { CONTROL_CHARACTER_MESSAGE, findControlCharacter, findControlCharacterInForm } from "@/lib/http/control-characters";
 import { isSameOriginRequest, isStateChanging } from "@/lib/http/same-origin";
@@ -20,6 +21,7 @@ export type ApiErrorCode =
   | "unsupported_media_type"
   | "payload_too_large"
   | "internal"
+  | "unavailable"
   | UnprocessableCode;
 
 export interface ApiError {
@@ -64,6 +66,13 @@ export function refusalResponse(error: unknown) {
   }
   if (error instanceof BodyTooLarge) {
     return apiError(413, "payload_too_large", `(body): the request may be at most ${sizeText(error.limitBytes)}`, { field: "(body)" });
+  }
+  if (isDatabaseUnavailable(error)) {
+    // Not a fault of the request or the code: the caller tries again once the database is back.
+    log.warn({ err: error }, "route handler: database not answering");
+    const response = apiError(503, "unavailable", DATABASE_UNAVAILABLE_MESSAGE);
+    response.headers.set("retry-after", String(DATABASE_RETRY_AFTER_S));
+    return response;
   }
   log.error({ err: error }, "route handler failed");
   return apiError(500, "internal", "Something went wrong on the server.");
@@ -123,8 +132,8 @@ async function parseWith(schema: z.ZodType | undefined, value: unknown): Promise
  * (403), the caller is authenticated and authorized (401/403), the body's type is checked (415), params,
  * query and body are parsed (400 naming the field, control characters included), then the work runs.
  * The work loads what it needs and answers 404 for anything the caller may not see. Refusals it throws
- * (RequestRefusal) become their JSON answer; any other error is logged redacted and answered 500 without
- * details. Every answer carries the security headers.
+ * (RequestRefusal) become their JSON answer; a database that is not answering is 503 with Retry-After; any
+ * other error is logged redacted and answered 500 without details. Every answer carries the security headers.
  */
 export function apiRoute<R extends Roles, P extends z.ZodType | undefined = undefined, Q extends z.ZodType | undefined = undefined, B extends z.ZodType | undefined = undefined>(
   spec: RouteSpec<R, P, Q, B>,

@@ -1,13 +1,11 @@
 import "server-only";
 import { databaseAnswers } from "@/db/health";
+import { DATABASE_RETRY_AFTER_S } from "@/db/faults";
 
 export interface HealthReport {
   ok: boolean;
   database: "up" | "down";
 }
-
-/** Seconds a load balancer or monitor should wait before asking again while the database is down. */
-const RETRY_AFTER_S = 5;
 
 /**
  * The health answer: 200 when the database answers, 503 with Retry-After when it does not. The check is
@@ -17,6 +15,6 @@ export async function healthResponse(check: () => Promise<boolean> = () => datab
   if (await check()) return Response.json({ ok: true, database: "up" } satisfies HealthReport, { headers: { "cache-control": "no-store" } });
   return Response.json({ ok: false, database: "down" } satisfies HealthReport, {
     status: 503,
-    headers: { "cache-control": "no-store", "retry-after": String(RETRY_AFTER_S) },
+    headers: { "cache-control": "no-store", "retry-after": String(DATABASE_RETRY_AFTER_S) },
   });
 }

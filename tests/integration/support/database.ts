@@ -6,6 +6,8 @@ import { DEMO_USERS, seedDemoUsers } from "@/lib/demo/seed";
 import { setSessionUserId } from "./session-double";
 
 const pool = new Pool({ connectionString: process.env.DATABASE_URL, max: 2 });
+// A test that restarts its database ends this pool's idle connections too; the pool drops them and connects anew.
+pool.on("error", () => undefined);
 export const testDb = drizzle(pool, { schema });
 
 /** Empties every table and puts the demo accounts back. */
