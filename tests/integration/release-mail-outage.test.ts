@@ -75,7 +75,7 @@ describe("releasing a job while the SMTP server is down", () => {
 
     const started = Date.now();
     const moved = await moveJob({ id: tunerId, role: "tuner" }, job.id, "released");
-    expect(moved).toEqual({ state: "released", revision: 1 });
+    expect(moved).toEqual({ state: "released", revision: 1, warnings: [] });
     // The release does not wait on SMTP.
     expect(Date.now() - started).toBeLessThan(10_000);
     const [row] = await testDb.select({ state: schema.jobs.state }).from(schema.jobs).where(eq(schema.jobs.id, job.id));

@@ -18,6 +18,10 @@ export async function resetDatabase(): Promise<void> {
   const names = tables.rows.map((row) => `"${row.tablename}"`).join(", ");
   if (names) await testDb.execute(sql.raw(`TRUNCATE ${names} RESTART IDENTITY CASCADE`));
   await testDb.execute(sql`ALTER SEQUENCE job_number_seq RESTART WITH 1`);
+  // Mail an earlier test queued (to an SMTP server long gone) must not reach the next test's server.
+  const queue = await testDb.execute<{ job: string | null; archive: string | null }>(sql`SELECT to_regclass('pgboss.job')::text AS job, to_regclass('pgboss.archive')::text AS archive`);
+  const queued = [queue.rows[0]?.job, queue.rows[0]?.archive].filter(Boolean);
+  if (queued.length) await testDb.execute(sql.raw(`DELETE FROM ${queued.join("; DELETE FROM ")}`));
   await seedDemoUsers(testDb);
   setSessionUserId(null);
 }
