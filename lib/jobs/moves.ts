@@ -4,6 +4,7 @@ import { getJob } from "@/db/jobs";
 import type { Viewer } from "@/db/visibility";
 import { changeJobState } from "@/db/revisions";
 import { approveRevision } from "./approve";
+import { sendConversionRecord } from "@/lib/delivery/send-record";
 import { getTravelerData } from "@/lib/traveler/data";
 import { listActiveUsersByRole } from "@/db/users";
 import { benchUrl } from "@/lib/bench/url";
@@ -21,10 +22,11 @@ export async function moveJob(
   actor: Viewer,
   jobId: string,
   to: JobState,
-  options: { acknowledgeWarnings?: boolean | undefined } = {},
-): Promise<{ state: JobState; revision: number }> {
-  const moved = to === "planned" ? { state: to, ...(await approveRevision(actor, jobId, options)) } : await changeJobState(actor, jobId, to);
+  options: { acknowledgeWarnings?: boolean | undefined; handedTo?: string | undefined } = {},
+): Promise<{ state: JobState; revision: number; recordMailedTo?: string | null }> {
+  const moved = to === "planned" ? { state: to, ...(await approveRevision(actor, jobId, options)) } : await changeJobState(actor, jobId, to, { handedTo: options.handedTo });
   if (moved.state === "released") await sendReleaseNotice(actor, jobId, moved.revision);
+  if (moved.state === "delivered") return { ...moved, recordMailedTo: await sendConversionRecord(actor, jobId) };
   return moved;
 }
 

@@ -33,12 +33,16 @@ export async function changeStateAction(jobId: string, _previous: FormResult | u
     resetForm: false,
     async work(value, user) {
       const id = await requireVisibleJob(user, jobId);
-      const moved = await moveJob(user, id, value.to, { acknowledgeWarnings: value.acknowledgeWarnings });
+      const moved = await moveJob(user, id, value.to, { acknowledgeWarnings: value.acknowledgeWarnings, handedTo: value.handedTo });
       revalidatePath(`/jobs/${id}`);
       revalidatePath("/jobs");
-      return value.to === "planned"
-        ? `Revision ${moved.revision} approved.`
-        : `The job is ${JOB_STATE_LABELS[moved.state].label}.`;
+      if (value.to === "planned") return `Revision ${moved.revision} approved.`;
+      if (moved.state === "delivered") {
+        return moved.recordMailedTo
+          ? `Delivered to ${value.handedTo}; the conversion record goes to ${moved.recordMailedTo}.`
+          : `Delivered to ${value.handedTo}. The customer has no e-mail address on file: print the record from the customer's page.`;
+      }
+      return `The job is ${JOB_STATE_LABELS[moved.state].label}.`;
     },
   });
 }
