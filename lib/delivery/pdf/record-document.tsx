@@ -23,7 +23,8 @@ const s = StyleSheet.create({
   blockTitle: { fontSize: 11, fontWeight: 700, marginBottom: 4 },
   headRow: { flexDirection: "row", borderBottomWidth: 1.5, borderBottomColor: INK, paddingBottom: 2, fontSize: 7.5, fontWeight: 700, textTransform: "uppercase" },
   cell: { flex: 1, paddingRight: 4 },
-  wide: { flex: 1.6, paddingRight: 4 },
+  wide: { flex: 1.5, paddingRight: 4 },
+  opens: { flex: 1.3, paddingRight: 4 },
   footer: { position: "absolute", bottom: MARGIN - 6, left: MARGIN, right: MARGIN, fontSize: 7.5, flexDirection: "row", justifyContent: "space-between" },
 });
 
@@ -47,14 +48,14 @@ function BlockSection({ block }: { block: RecordBlock }) {
       <Text style={shared.sectionTitle}>Power valves and opening points</Text>
       <View style={s.headRow}>
         <Text style={s.cell}>Valve</Text>
-        <Text style={s.cell}>Opens</Text>
+        <Text style={s.opens}>Opens</Text>
         <Text style={s.wide}>Enrichment planned</Text>
         <Text style={s.cell}>Opening as set</Text>
       </View>
       {block.valves.map((v, i) => (
         <View key={i} style={s.row}>
           <Text style={s.cell}>{v.valve}</Text>
-          <Text style={[s.cell, s.figure]}>{v.opens}</Text>
+          <Text style={[s.opens, s.figure]}>{v.opens}</Text>
           <Text style={s.wide}>{v.target}</Text>
           <Text style={[s.cell, s.figure]}>{v.measured ?? "-"}</Text>
         </View>
@@ -122,7 +123,7 @@ export function ConversionRecordDocument({ data, timeZone, printedAt }: { data: 
         {data.blocks.map((block) => (
           <BlockSection key={block.side} block={block} />
         ))}
-        <View style={s.section}>
+        <View style={s.section} wrap={false}>
           <Text style={shared.sectionTitle}>Safety</Text>
           {ALL_CAUTIONS.map((caution) => (
             <CautionRow key={caution.topic} caution={caution} />
