@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, count, desc, eq, gte, inArray, isNull, like, ne, or } from "drizzle-orm";
 import type { JobState } from "./job-states";
 import { getDb } from "./client";
-import type { Viewer } from "./visibility";
+import { visibleJobsWhere, type Viewer } from "./visibility";
 import { auditEvents, customers, jobs, measurements, meteringBlocks, operations, planRevisions, signOffs, tuningLogs, users } from "./schema";
 
 // The reads behind the home pages' work queues: small lists, newest or oldest first, each bounded.
@@ -193,7 +193,8 @@ export async function listRecentSignOffs(viewer: Viewer, limit = 10): Promise<Si
     .innerJoin(planRevisions, eq(planRevisions.id, operations.revisionId))
     .innerJoin(jobs, eq(jobs.id, planRevisions.jobId))
     .innerJoin(meteringBlocks, eq(meteringBlocks.id, operations.blockId))
-    .where(eq(signOffs.userId, viewer.id))
+    // A job sent back to draft (a correction from a log) leaves the bench's sight: its links would answer 404.
+    .where(and(eq(signOffs.userId, viewer.id), visibleJobsWhere(viewer)))
     .orderBy(desc(signOffs.signedAt))
     .limit(limit);
   return rows.map((r) => ({ ...r, signedAt: r.signedAt.toISOString() }));
