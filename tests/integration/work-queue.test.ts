@@ -152,6 +152,12 @@ describe("the machinist's queue", () => {
     expect(queue.inProgress[0]).toMatchObject({ href: `/bench/${startedBlock}?revision=1`, operations: total, operationsLeft: total - 1, side: "primary" });
     expect(queue.recent).toHaveLength(1);
     expect(queue.recent[0]).toMatchObject({ operationId: operation.id, href: `/bench/${startedBlock}?revision=1`, revision: 1 });
+
+    // Sent back to draft (a correction from a log), the job leaves the bench's sight and the queue with it.
+    await testDb.update(schema.jobs).set({ state: "draft" }).where(eq(schema.jobs.id, started.id));
+    const after = (await (await readQueue()).json()) as MachinistQueue;
+    expect(after.recent).toEqual([]);
+    expect(after.inProgress).toEqual([]);
   });
 });
 
