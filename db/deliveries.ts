@@ -29,8 +29,11 @@ export interface ConversionRecordRows {
   delivery: { handedTo: string; handedOverBy: string; deliveredAt: Date } | null;
 }
 
-/** The record of one job's current revision, or undefined when the job is missing, hidden, or never approved. */
-export async function getConversionRecordRows(viewer: Viewer, jobId: string): Promise<ConversionRecordRows | undefined> {
+/**
+ * The record of one revision of a job (the current one by default), or undefined when the job or the revision is
+ * missing or hidden.
+ */
+export async function getConversionRecordRows(viewer: Viewer, jobId: string, revisionNumber?: number): Promise<ConversionRecordRows | undefined> {
   const db = getDb();
   const [row] = await db
     .select({ job: jobs, customerName: customers.name, customerEmail: customers.email, tunerName: users.name, tunerEmail: users.email })
@@ -42,7 +45,7 @@ export async function getConversionRecordRows(viewer: Viewer, jobId: string): Pr
   const [revision] = await db
     .select({ id: planRevisions.id, number: planRevisions.number, snapshot: planRevisions.snapshot })
     .from(planRevisions)
-    .where(and(eq(planRevisions.jobId, jobId), eq(planRevisions.number, row.job.currentRevision)));
+    .where(and(eq(planRevisions.jobId, jobId), eq(planRevisions.number, revisionNumber ?? row.job.currentRevision)));
   if (!revision) return undefined;
   const ops = await db
     .select({
@@ -68,7 +71,7 @@ export async function getConversionRecordRows(viewer: Viewer, jobId: string): Pr
     .select({ handedTo: deliveries.handedTo, handedOverBy: users.name, deliveredAt: deliveries.deliveredAt })
     .from(deliveries)
     .innerJoin(users, eq(users.id, deliveries.handedOverById))
-    .where(eq(deliveries.jobId, jobId));
+    .where(and(eq(deliveries.jobId, jobId), eq(deliveries.revisionNumber, revision.number)));
   return {
     job: row.job,
     customer: { name: row.customerName, email: row.customerEmail },
@@ -88,9 +91,19 @@ export async function getConversionRecordRows(viewer: Viewer, jobId: string): Pr
   };
 }
 
-/** Notes where the delivered job's conversion record was mailed. */
-export async function markRecordMailed(jobId: string, email: string): Promise<void> {
-  await getDb().update(deliveries).set({ recordMailedTo: email }).where(eq(deliveries.jobId, jobId));
+/** Notes where the conversion record of a delivered revision was mailed. */
+export async function markRecordMailed(jobId: string, revisionNumber: number, email: string): Promise<void> {
+  await getDb()
+    .update(deliveries)
+    .set({ recordMailedTo: email })
+    .where(and(eq(deliveries.jobId, jobId), eq(deliveries.revisionNumber, revisionNumber)));
+}
+
+export interface CustomerDelivery {
+  revision: number;
+  handedTo: string;
+  deliveredAt: string;
+  recordMailedTo: string | null;
 }
 
 export interface CustomerJob {
@@ -99,28 +112,35 @@ export interface CustomerJob {
   state: JobState;
   carburetor: string;
   currentRevision: number;
-  delivery: { handedTo: string; deliveredAt: string; recordMailedTo: string | null } | null;
+  /** Every hand-over of the job, newest first (a car that came back is delivered again on a new revision). */
+  deliveries: CustomerDelivery[];
 }
 
-/** Every job of one customer, newest first, with its hand-over when it was delivered. */
+/** Every job of one customer, newest first, with its hand-overs. */
 export async function listCustomerJobs(customerId: string): Promise<CustomerJob[]> {
-  const rows = await getDb()
-    .select({
-      id: jobs.id,
-      number: jobs.number,
-      state: jobs.state,
-      carburetor: jobs.carburetor,
-      currentRevision: jobs.currentRevision,
-      handedTo: deliveries.handedTo,
-      deliveredAt: deliveries.deliveredAt,
-      recordMailedTo: deliveries.recordMailedTo,
-    })
+  const db = getDb();
+  const rows = await db
+    .select({ id: jobs.id, number: jobs.number, state: jobs.state, carburetor: jobs.carburetor, currentRevision: jobs.currentRevision })
     .from(jobs)
-    .leftJoin(deliveries, eq(deliveries.jobId, jobs.id))
     .where(eq(jobs.customerId, customerId))
     .orderBy(desc(jobs.createdAt));
-  return rows.map(({ handedTo, deliveredAt, recordMailedTo, ...job }) => ({
+  const handOvers = rows.length
+    ? await db
+        .select({
+          jobId: deliveries.jobId,
+          revision: deliveries.revisionNumber,
+          handedTo: deliveries.handedTo,
+          deliveredAt: deliveries.deliveredAt,
+          recordMailedTo: deliveries.recordMailedTo,
+        })
+        .from(deliveries)
+        .where(inArray(deliveries.jobId, rows.map((r) => r.id)))
+        .orderBy(desc(deliveries.revisionNumber))
+    : [];
+  return rows.map((job) => ({
     ...job,
-    delivery: handedTo && deliveredAt ? { handedTo, deliveredAt: deliveredAt.toISOString(), recordMailedTo } : null,
+    deliveries: handOvers
+      .filter((d) => d.jobId === job.id)
+      .map(({ revision, handedTo, deliveredAt, recordMailedTo }) => ({ revision, handedTo, deliveredAt: deliveredAt.toISOString(), recordMailedTo })),
   }));
 }

@@ -183,13 +183,12 @@ export type MeteringBlock = typeof meteringBlocks.$inferSelect;
 
 /**
  * The hand-over of a job's blocks to the customer: who handed them over, when, to whom, and where the
- * conversion record was mailed. One per job: a delivered job makes no further moves.
+ * conversion record was mailed. One per revision: the car may come back, and a new revision is delivered again.
  */
 export const deliveries = pgTable("deliveries", {
   id: uuid("id").primaryKey().defaultRandom(),
   jobId: uuid("job_id")
     .notNull()
-    .unique()
     .references(() => jobs.id, { onDelete: "cascade" }),
   /** The revision the delivered blocks were machined to. */
   revisionNumber: integer("revision_number").notNull(),
@@ -201,7 +200,7 @@ export const deliveries = pgTable("deliveries", {
   deliveredAt: timestamp("delivered_at", { withTimezone: true }).notNull().defaultNow(),
   /** Where the conversion record was mailed (null: the customer has no e-mail address on file). */
   recordMailedTo: text("record_mailed_to"),
-});
+}, (t) => [unique("deliveries_job_revision").on(t.jobId, t.revisionNumber)]);
 export type Delivery = typeof deliveries.$inferSelect;
 
 export const VALVE_KINDS = ["vacuum", "boost"] as const;

@@ -6,7 +6,7 @@ CREATE TABLE "deliveries" (
 	"handed_to" text NOT NULL,
 	"delivered_at" timestamp with time zone DEFAULT now() NOT NULL,
 	"record_mailed_to" text,
-	CONSTRAINT "deliveries_job_id_unique" UNIQUE("job_id")
+	CONSTRAINT "deliveries_job_revision" UNIQUE("job_id","revision_number")
 );
 --> statement-breakpoint
 ALTER TABLE "deliveries" ADD CONSTRAINT "deliveries_job_id_jobs_id_fk" FOREIGN KEY ("job_id") REFERENCES "public"."jobs"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint

@@ -47,6 +47,6 @@ export async function sendConversionRecord(actor: Viewer, jobId: string): Promis
     attachments: [{ filename: conversionRecordFileName(rows.job.number, rows.revision), content: pdf, contentType: "application/pdf" }],
   });
   if (!queued) return null;
-  await markRecordMailed(jobId, email);
+  await markRecordMailed(jobId, rows.revision, email);
   return email;
 }

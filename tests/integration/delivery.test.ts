@@ -9,6 +9,10 @@ import { and, asc, eq } from "drizzle-orm";
 import { POST as stateRoute } from "@/app/api/jobs/[id]/state/route";
 import { GET as recordRoute } from "@/app/api/jobs/[id]/conversion-record/route";
 import { signOffOperation } from "@/db/bench";
+import { listCustomerJobs } from "@/db/deliveries";
+import { updateJob } from "@/db/jobs";
+import { changeJobState } from "@/db/revisions";
+import { approveRevision } from "@/lib/jobs/approve";
 import * as schema from "@/db/schema";
 import { ALL_CAUTIONS } from "@/lib/safety/cautions";
 import { actAs, jsonRequest, resetDatabase, testDb } from "./support/database";
@@ -41,20 +45,25 @@ async function verifiedJob(customerEmail: string | null) {
   const job = await makeJob("released");
   const [owner] = await testDb.select({ customerId: schema.jobs.customerId }).from(schema.jobs).where(eq(schema.jobs.id, job.id));
   await testDb.update(schema.customers).set({ email: customerEmail }).where(eq(schema.customers.id, owner!.customerId));
+  await signEverything(job.id);
+  return { ...job, customerId: owner!.customerId };
+}
+
+/** Signs every operation of the job's current revision exactly on plan; the last sign-off verifies the job. */
+async function signEverything(jobId: string) {
   const ops = await testDb
     .select({ id: schema.operations.id, measurements: schema.operations.measurements })
     .from(schema.operations)
     .innerJoin(schema.planRevisions, eq(schema.planRevisions.id, schema.operations.revisionId))
-    .where(and(eq(schema.planRevisions.jobId, job.id), eq(schema.planRevisions.status, "current")))
+    .where(and(eq(schema.planRevisions.jobId, jobId), eq(schema.planRevisions.status, "current")))
     .orderBy(asc(schema.operations.number));
   const machinistId = (await actAs("machinist"))!;
   for (const op of ops) {
     const readings = Object.fromEntries((op.measurements as Planned[]).map((m) => [m.key, m.plannedSi]));
     await signOffOperation({ id: machinistId, role: "machinist" }, { operationId: op.id, measurements: readings, note: "" });
   }
-  const [row] = await testDb.select({ state: schema.jobs.state }).from(schema.jobs).where(eq(schema.jobs.id, job.id));
+  const [row] = await testDb.select({ state: schema.jobs.state }).from(schema.jobs).where(eq(schema.jobs.id, jobId));
   expect(row!.state).toBe("verified");
-  return job;
 }
 
 const deliver = (jobId: string, body: unknown) => stateRoute(jsonRequest(`/api/jobs/${jobId}/state`, "POST", body), { params: Promise.resolve({ id: jobId }) });
@@ -162,6 +171,37 @@ describe("delivering a verified job", () => {
     const [delivery] = await testDb.select().from(schema.deliveries).where(eq(schema.deliveries.jobId, job.id));
     expect(delivery).toMatchObject({ handedTo: "A courier", recordMailedTo: null });
     expect((await record(job.id)).status).toBe(200);
+  });
+});
+
+describe("a car that comes back", () => {
+  it("is delivered again on its new revision, and the customer's page keeps both records", async () => {
+    const job = await verifiedJob(null);
+    const tuner = { id: (await actAs("tuner"))!, role: "tuner" as const };
+    expect((await deliver(job.id, { to: "delivered", handedTo: "Wren Halloway" })).status).toBe(200);
+    // Back with a log: the inputs change (the job returns to draft), a revision 2 is approved, released and machined.
+    await updateJob(tuner, job.id, { fields: { notes: "second visit" } });
+    await approveRevision(tuner, job.id);
+    await changeJobState(tuner, job.id, "released");
+    await signEverything(job.id);
+    await actAs("tuner");
+    const again = await deliver(job.id, { to: "delivered", handedTo: "Ada Wren" });
+    expect(again.status).toBe(200);
+    expect((await again.json()).revision).toBe(2);
+
+    const jobs = await listCustomerJobs(job.customerId);
+    expect(jobs[0]!.deliveries.map((d) => [d.revision, d.handedTo])).toEqual([
+      [2, "Ada Wren"],
+      [1, "Wren Halloway"],
+    ]);
+    const first = await recordRoute(new Request(`http://127.0.0.1/api/jobs/${job.id}/conversion-record?revision=1`), { params: Promise.resolve({ id: job.id }) });
+    expect(first.status).toBe(200);
+    const text = await pdfText(new Uint8Array(await first.arrayBuffer()), "first-visit.pdf");
+    expect(text).toContain("Wren Halloway");
+    expect(text).not.toContain("Ada Wren");
+    const missing = await recordRoute(new Request(`http://127.0.0.1/api/jobs/${job.id}/conversion-record?revision=9`), { params: Promise.resolve({ id: job.id }) });
+    expect(missing.status).toBe(404);
+    expect((await missing.json()).error.field).toBe("revision");
   });
 });
 

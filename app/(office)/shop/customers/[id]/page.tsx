@@ -64,25 +64,29 @@ export default async function CustomerPage({ params }: { params: Promise<{ id: s
                       <Tag tone={job.state === "delivered" ? "muted" : "plain"}>{JOB_STATE_LABELS[job.state].label}</Tag>
                     </Td>
                     <Td className="text-sm">
-                      {job.delivery ? (
-                        <>
-                          to {job.delivery.handedTo}
-                          <span className="block text-xs text-pencil">{formatDateTime(job.delivery.deliveredAt, zone)}</span>
-                        </>
+                      {job.deliveries.length ? (
+                        job.deliveries.map((d) => (
+                          <span key={d.revision} className="block">
+                            to {d.handedTo}
+                            <span className="block text-xs text-pencil">{formatDateTime(d.deliveredAt, zone)}</span>
+                          </span>
+                        ))
                       ) : (
                         <span className="text-pencil">not yet</span>
                       )}
                     </Td>
                     <Td className="text-sm">
-                      {job.delivery ? (
-                        <>
-                          <a href={`/api/jobs/${job.id}/conversion-record`} className="font-semibold text-accent hover:underline" download>
-                            Revision {job.currentRevision} record (PDF)
-                          </a>
-                          <span className="block text-xs text-pencil">
-                            {job.delivery.recordMailedTo ? `mailed to ${job.delivery.recordMailedTo}` : "not mailed: no e-mail address on file"}
+                      {job.deliveries.length ? (
+                        job.deliveries.map((d) => (
+                          <span key={d.revision} className="block">
+                            <a href={`/api/jobs/${job.id}/conversion-record?revision=${d.revision}`} className="font-semibold text-accent hover:underline" download>
+                              Revision {d.revision} record (PDF)
+                            </a>
+                            <span className="block text-xs text-pencil">
+                              {d.recordMailedTo ? `mailed to ${d.recordMailedTo}` : "not mailed: no e-mail address on file"}
+                            </span>
                           </span>
-                        </>
+                        ))
                       ) : (
                         <span className="text-pencil">made at delivery</span>
                       )}
