@@ -9,7 +9,7 @@ import { JOB_STATE_LABELS } from "@/db/job-states";
 import { parseIdParam } from "@/lib/http/route-params";
 import { shownPlanOf, type ShownPlan } from "@/lib/jobs/plan-shown";
 import { shopTimeZone } from "@/lib/server/env";
-import { ButtonLink } from "@/components/ui/button";
+import { ButtonLink, buttonClass } from "@/components/ui/button";
 import { PageHeader, Sheet, Tag } from "@/components/ui/sheet";
 import { BlockList } from "./_plan/block-list";
 import { EngineSummary } from "./_plan/engine-summary";
@@ -72,6 +72,12 @@ export default async function JobPage({ params }: Params) {
               <ButtonLink href={`/jobs/${job.id}/blocks`} variant="secondary">
                 Edit blocks and stages
               </ButtonLink>
+              {job.state === "delivered" ? (
+                // A file, not a page: a plain link so the browser downloads it.
+                <a href={`/api/jobs/${job.id}/conversion-record`} className={buttonClass("secondary")} download>
+                  Conversion record (PDF)
+                </a>
+              ) : null}
             </>
           ) : undefined
         }
