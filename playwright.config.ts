@@ -62,6 +62,8 @@ export default defineConfig({
     { name: "desktop-security", use: desktop, testMatch: /security-headers\.spec\.ts$/, dependencies: ["sign-in"] },
     // Its tests change nothing the others read, so they share the two workers.
     { name: "desktop-jobs", use: desktop, testMatch: /jobs\.spec\.ts$/, fullyParallel: true, dependencies: ["sign-in"] },
+    // Reads only: axe on every working screen, beside the chain.
+    { name: "desktop-accessibility", use: desktop, testMatch: /accessibility\.spec\.ts$/, dependencies: ["sign-in"] },
     { name: "desktop-reference", use: desktop, testMatch: /reference\.spec\.ts$/, dependencies: ["desktop-jobs"] },
     { name: "desktop-planner", use: desktop, testMatch: /planner\.spec\.ts$/, dependencies: ["desktop-reference"] },
     // Releases a revision 2 (mail to the bench) before the phone spec reads the outbox's newest message.

@@ -9,9 +9,13 @@ import { applySecurityHeaders, createNonce, securityHeaders } from "@/lib/http/s
 
 const signInGate = withAuth({ pages: { signIn: "/sign-in" } });
 
-/** Paths anyone may open: sign-in, setting a password from a reset link, the API (it answers for itself), Next's assets. */
+/**
+ * Paths anyone may open: sign-in, setting a password from a reset link, the API (it answers for itself), Next's
+ * assets, and what a phone fetches to install the app (the manifest and its icons: browsers fetch them without
+ * the session cookie).
+ */
 function isPublicPath(pathname: string): boolean {
-  return /^\/(sign-in|reset-password|api\/|_next\/|favicon\.ico|icon\.svg|robots\.txt)/.test(pathname);
+  return /^\/(sign-in|reset-password|api\/|_next\/|favicon\.ico|icon\.svg|robots\.txt|manifest\.webmanifest$|icons\/|apple-icon\.png)/.test(pathname);
 }
 
 export async function proxy(request: NextRequest, event: NextFetchEvent): Promise<Response> {

@@ -6,6 +6,8 @@ import "./globals.css";
 export const metadata: Metadata = {
   title: { default: "Blockwright", template: "%s · Blockwright" },
   description: "Metering-block conversions for boosted carbureted engines: plans, travelers and bench records.",
+  // Opened from a phone's home screen, the app runs full-screen under its own name (the manifest is app/manifest.ts).
+  appleWebApp: { capable: true, title: "Blockwright", statusBarStyle: "default" },
 };
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#f5f3ec" };

@@ -53,6 +53,12 @@ export const PLACES: NavLink[] = [
     roles: ["admin"],
   },
   {
+    href: "/safety",
+    label: "Safety",
+    purpose: "The cautions for grinding, drilling, fuel and pressurized bowls that every traveler carries.",
+    roles: ["admin", "tuner", "machinist"],
+  },
+  {
     href: "/account",
     label: "Account",
     purpose: "Your password, and signing out on every device at once.",

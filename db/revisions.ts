@@ -8,7 +8,7 @@ import { namesAtApproval, revisionNameColumns, withReleasedBy, type RevisionName
 import { getDb, type Executor } from "./client";
 import { lockJob, type BlockRow } from "./jobs";
 import type { Viewer } from "./visibility";
-import { enrichmentStages, jobs, measurements, meteringBlocks, operations, planRevisions, signOffs, type Job } from "./schema";
+import { deliveries, enrichmentStages, jobs, measurements, meteringBlocks, operations, planRevisions, signOffs, type Job } from "./schema";
 
 /**
  * What an approved revision keeps forever: the inputs as they were, the plan solved from them, and the names it
@@ -119,7 +119,12 @@ export async function currentRevisionComplete(
  * Moves the job to another state when the move is allowed: planned -> released stamps the revision's
  * release (and keeps the releaser's name with it); verified needs a complete bench record. Approval (-> planned) keeps a revision: `storeRevision`.
  */
-export async function changeJobState(actor: Viewer, jobId: string, to: Exclude<JobState, "planned">): Promise<{ state: JobState; revision: number }> {
+export async function changeJobState(
+  actor: Viewer,
+  jobId: string,
+  to: Exclude<JobState, "planned">,
+  options: { handedTo?: string | undefined } = {},
+): Promise<{ state: JobState; revision: number }> {
   return getDb().transaction(async (tx) => {
     const job = await lockJob(tx, jobId);
     if (!canMove(job.state, to)) throw new RequestRefusal(409, `A ${job.state} job cannot move to ${to}.`, "to");
@@ -134,8 +139,14 @@ export async function changeJobState(actor: Viewer, jobId: string, to: Exclude<J
       const record = await currentRevisionComplete(tx, jobId, job.currentRevision);
       if (!record.complete) throw new RequestRefusal(409, "Every operation must be signed, with every measurement within plan, before the job is verified.", "to");
     }
+    if (to === "delivered") {
+      // Who took the blocks is part of the record: a delivery without a name is not made.
+      const handedTo = options.handedTo?.trim();
+      if (!handedTo) throw new RequestRefusal(400, "Say who the blocks were handed to.", "handedTo");
+      await tx.insert(deliveries).values({ jobId, revisionNumber: job.currentRevision, handedOverById: actor.id, handedTo, deliveredAt: now });
+    }
     await tx.update(jobs).set({ state: to, updatedAt: now }).where(eq(jobs.id, jobId));
-    await recordAudit(tx, actor.id, "job.state", jobId, { from: job.state, to });
+    await recordAudit(tx, actor.id, "job.state", jobId, { from: job.state, to, ...(to === "delivered" ? { handedTo: options.handedTo?.trim() } : {}) });
     return { state: to, revision: job.currentRevision };
   });
 }

@@ -181,6 +181,28 @@ export const meteringBlocks = pgTable(
 );
 export type MeteringBlock = typeof meteringBlocks.$inferSelect;
 
+/**
+ * The hand-over of a job's blocks to the customer: who handed them over, when, to whom, and where the
+ * conversion record was mailed. One per revision: the car may come back, and a new revision is delivered again.
+ */
+export const deliveries = pgTable("deliveries", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  jobId: uuid("job_id")
+    .notNull()
+    .references(() => jobs.id, { onDelete: "cascade" }),
+  /** The revision the delivered blocks were machined to. */
+  revisionNumber: integer("revision_number").notNull(),
+  handedOverById: uuid("handed_over_by_id")
+    .notNull()
+    .references(() => users.id),
+  /** The person who took the blocks, by name as they gave it. */
+  handedTo: text("handed_to").notNull(),
+  deliveredAt: timestamp("delivered_at", { withTimezone: true }).notNull().defaultNow(),
+  /** Where the conversion record was mailed (null: the customer has no e-mail address on file). */
+  recordMailedTo: text("record_mailed_to"),
+}, (t) => [unique("deliveries_job_revision").on(t.jobId, t.revisionNumber)]);
+export type Delivery = typeof deliveries.$inferSelect;
+
 export const VALVE_KINDS = ["vacuum", "boost"] as const;
 export const THROTTLE_MODES = ["part", "full"] as const;
 export const ENRICHMENT_TARGET_KINDS = ["afr", "lambda", "percentMainJet", "area"] as const;

@@ -6,6 +6,7 @@ import type { Viewer } from "@/db/visibility";
 import { changeJobState } from "@/db/revisions";
 import { approveRevision } from "./approve";
 import { revisionOffRackDrills, type MoveWarning } from "./drill-rack-check";
+import { sendConversionRecord } from "@/lib/delivery/send-record";
 import { getTravelerData } from "@/lib/traveler/data";
 import { listActiveUsersByRole } from "@/db/users";
 import { benchUrl } from "@/lib/bench/url";
@@ -24,11 +25,13 @@ export async function moveJob(
   actor: Viewer,
   jobId: string,
   to: JobState,
-  options: { acknowledgeWarnings?: boolean | undefined } = {},
-): Promise<{ state: JobState; revision: number; warnings: MoveWarning[] }> {
+  options: { acknowledgeWarnings?: boolean | undefined; handedTo?: string | undefined } = {},
+): Promise<{ state: JobState; revision: number; warnings: MoveWarning[]; recordMailedTo?: string | null }> {
   // Reopening a verified job lets signed readings be corrected again: an admin's call, not the tuner's.
   if (to === "machining" && actor.role !== "admin") throw new RequestRefusal(403, "Only an admin reopens a verified job for corrections.", "to");
-  const moved = to === "planned" ? { state: to, ...(await approveRevision(actor, jobId, options)) } : await changeJobState(actor, jobId, to);
+  const moved =
+    to === "planned" ? { state: to, ...(await approveRevision(actor, jobId, options)) } : await changeJobState(actor, jobId, to, { handedTo: options.handedTo });
+  if (moved.state === "delivered") return { ...moved, warnings: [], recordMailedTo: await sendConversionRecord(actor, jobId) };
   if (moved.state !== "released") return { ...moved, warnings: [] };
   const warnings = await revisionOffRackDrills(jobId, moved.revision);
   await sendReleaseNotice(actor, jobId, moved.revision);

@@ -2,6 +2,7 @@ import { z } from "zod";
 import { optionalQuantity } from "@/lib/forms/quantity/quantity";
 import { optionalQuantityInSI, quantityInSI } from "@/lib/forms/quantity/si";
 import { JOB_STATES } from "@/db/job-states";
+import { formText } from "@/lib/forms/text-field";
 import { SITE_ELEVATION_RANGE_M } from "@/lib/engineering/atmosphere";
 import { M_PER_FT, M_PER_IN as IN, PA_PER_INHG, PA_PER_PSI as PSI } from "@/lib/engineering/unit-factors";
 
@@ -189,6 +190,12 @@ export const jobStateChangeSchema = z.object({
   acknowledgeWarnings: z
     .preprocess((v) => (v === "on" || v === "true" ? true : v === "false" ? false : v), z.boolean({ error: "acknowledgeWarnings must be true or false." }))
     .optional(),
+  /** Delivering: the person who took the blocks, by name (kept with the delivery and printed on the record). */
+  handedTo: formText("name of who took the blocks", { max: 200 }).optional(),
+}).superRefine((value, ctx) => {
+  if (value.to === "delivered" && !value.handedTo) {
+    ctx.addIssue({ code: "custom", path: ["handedTo"], message: "Say who the blocks were handed to." });
+  }
 });
 
 export const stageChoiceSchema = z.object({

@@ -26,6 +26,9 @@ const envSchema = z.object({
   S3_BUCKET: z.string().default("blockwright"),
   S3_ACCESS_KEY_ID: z.string().default("S3RVER"),
   S3_SECRET_ACCESS_KEY: z.string().default("S3RVER"),
+  // The shop as its customers' conversion records name it, and how to reach it (empty: the job's tuner, by e-mail).
+  SHOP_NAME: z.string().trim().min(1, { error: "SHOP_NAME must not be empty" }).max(120).default("Blockwright"),
+  SHOP_CONTACT: z.string().trim().max(300).default(""),
   // The zone every page, mail and traveler prints dates in (an IANA name such as America/Chicago), stated once.
   SHOP_TIME_ZONE: z
     .string()

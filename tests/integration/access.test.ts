@@ -17,6 +17,8 @@ import { GET as listJobsRoute, POST as createJobRoute } from "@/app/api/jobs/rou
 import { GET as readJobRoute, PATCH as patchJobRoute } from "@/app/api/jobs/[id]/route";
 import { POST as jobStateRoute } from "@/app/api/jobs/[id]/state/route";
 import { GET as jobPlanRoute } from "@/app/api/jobs/[id]/plan/route";
+import { GET as workQueueRoute } from "@/app/api/work-queue/route";
+import { GET as conversionRecordRoute } from "@/app/api/jobs/[id]/conversion-record/route";
 import { GET as travelerRoute } from "@/app/api/blocks/[blockId]/traveler/route";
 import { blockIdOf } from "./support/jobs";
 import { POST as signOffRoute } from "@/app/api/operations/[id]/sign-off/route";
@@ -237,6 +239,17 @@ const CASES: AccessCase[] = [
     expected: OFFICE_ONLY(200),
     setup: async () => (await makeJob("planned")).id,
     call: async (id) => (await jobStateRoute(jsonRequest(`/api/jobs/${id}/state`, "POST", { to: "released" }), jobParams(id))).status,
+  },
+  {
+    name: "GET /api/work-queue",
+    expected: EVERYONE(200),
+    call: async () => (await workQueueRoute(new Request("http://127.0.0.1/api/work-queue"), { params: Promise.resolve({}) })).status,
+  },
+  {
+    name: "GET /api/jobs/{id}/conversion-record (released: not yet delivered)",
+    expected: OFFICE_ONLY(409),
+    setup: async () => (await makeJob("released")).id,
+    call: async (id) => (await conversionRecordRoute(new Request(`http://127.0.0.1/api/jobs/${id}/conversion-record`), jobParams(id))).status,
   },
   {
     name: "GET /api/blocks/{id}/traveler (released)",

@@ -108,16 +108,24 @@ describe("changeStateAction", () => {
     const job = await makeJob("released");
     // The bench record that earns "verified" is another part's business; here the job is simply put there.
     await testDb.update(schema.jobs).set({ state: "verified" }).where(eq(schema.jobs.id, job.id));
-    await actAs("tuner");
-    expect((await changeStateAction(job.id, undefined, formData({ to: "delivered" }))).httpStatus).toBe(200);
+    const tunerId = await actAs("tuner");
+    // Who took the blocks is asked for, and nothing moves without it.
+    const unnamed = await changeStateAction(job.id, undefined, formData({ to: "delivered", handedTo: "" }));
+    expect(unnamed.httpStatus).toBe(400);
+    expect(unnamed.error?.handedTo).toBeTruthy();
+    expect((await jobRow(job.id)).state).toBe("verified");
+    expect((await changeStateAction(job.id, undefined, formData({ to: "delivered", handedTo: "Wren Halloway" }))).httpStatus).toBe(200);
     expect((await jobRow(job.id)).state).toBe("delivered");
+    const [delivery] = await testDb.select().from(schema.deliveries).where(eq(schema.deliveries.jobId, job.id));
+    expect(delivery).toMatchObject({ handedTo: "Wren Halloway", handedOverById: tunerId, revisionNumber: 1 });
   });
 
   it("answers 409 to a move the state does not allow, naming the field, and moves nothing", async () => {
     const job = await makeJob("draft");
     await actAs("tuner");
     for (const to of ["released", "delivered", "verified"]) {
-      const result = await changeStateAction(job.id, undefined, formData({ to }));
+      // A recipient is named so that delivering reaches the state check.
+      const result = await changeStateAction(job.id, undefined, formData({ to, handedTo: "Wren Halloway" }));
       expect(result.httpStatus, to).toBe(409);
       expect(result.error?.to, to).toBeTruthy();
     }

@@ -34,10 +34,17 @@ export async function changeStateAction(jobId: string, _previous: FormResult<Sta
     resetForm: false,
     async work(value, user) {
       const id = await requireVisibleJob(user, jobId);
-      const moved = await moveJob(user, id, value.to, { acknowledgeWarnings: value.acknowledgeWarnings });
+      const moved = await moveJob(user, id, value.to, { acknowledgeWarnings: value.acknowledgeWarnings, handedTo: value.handedTo });
       revalidatePath(`/jobs/${id}`);
       revalidatePath("/jobs");
-      const done = value.to === "planned" ? `Revision ${moved.revision} approved.` : `The job is ${JOB_STATE_LABELS[moved.state].label}.`;
+      const done =
+        value.to === "planned"
+          ? `Revision ${moved.revision} approved.`
+          : moved.state === "delivered"
+            ? moved.recordMailedTo
+              ? `Delivered to ${value.handedTo}; the conversion record goes to ${moved.recordMailedTo}.`
+              : `Delivered to ${value.handedTo}. The customer has no e-mail address on file: print the record from the customer's page.`
+            : `The job is ${JOB_STATE_LABELS[moved.state].label}.`;
       return { message: [done, ...moved.warnings.map((w) => w.message)].join(" "), data: { warnings: moved.warnings } };
     },
   });

@@ -9,7 +9,7 @@ import { parseIdParam } from "@/lib/http/route-params";
 import { offRackDrills } from "@/lib/jobs/drill-rack-check";
 import { shownPlanOf, type ShownPlan } from "@/lib/jobs/plan-shown";
 import { shopTimeZone } from "@/lib/server/env";
-import { ButtonLink } from "@/components/ui/button";
+import { ButtonLink, buttonClass } from "@/components/ui/button";
 import { PageHeader, Sheet, Tag } from "@/components/ui/sheet";
 import { BlockList } from "./_plan/block-list";
 import { EngineSummary } from "./_plan/engine-summary";
@@ -78,6 +78,12 @@ export default async function JobPage({ params }: Params) {
               <ButtonLink href={`/jobs/${job.id}/blocks`} variant="secondary">
                 Edit blocks and stages
               </ButtonLink>
+              {job.state === "delivered" ? (
+                // A file, not a page: a plain link so the browser downloads it.
+                <a href={`/api/jobs/${job.id}/conversion-record`} className={buttonClass("secondary")} download>
+                  Conversion record (PDF)
+                </a>
+              ) : null}
             </>
           ) : undefined
         }

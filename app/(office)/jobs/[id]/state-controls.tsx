@@ -2,7 +2,7 @@
 
 import { useServerForm } from "@/components/forms/use-server-form";
 import { Button } from "@/components/ui/button";
-import { FormMessage } from "@/components/ui/field";
+import { Field, FormMessage, Input } from "@/components/ui/field";
 import type { FormResult } from "@/lib/forms/form-action";
 import type { JobState } from "@/db/job-states";
 import type { StateMoveData } from "./state-moves";
@@ -32,10 +32,18 @@ export function StateControls({
   // A move that went ahead with warnings (a drill off the rack at release) is said in the warning's colours.
   const warned = (data?.warnings.length ?? 0) > 0;
   const refused =
-    result && result.httpStatus !== 200 ? (result.error?.[""] ?? result.error?.to ?? result.error?.acknowledgeWarnings ?? ["Not done."]) : undefined;
+    result && result.httpStatus !== 200 ? (result.error?.[""] ?? result.error?.to ?? result.error?.acknowledgeWarnings ?? result.error?.handedTo ?? ["Not done."]) : undefined;
   const approving = moves.some((m) => m.to === "planned");
+  const delivering = moves.some((m) => m.to === "delivered");
   return (
     <form {...formProps} aria-label="Job state" className="flex flex-col items-end gap-2">
+      {delivering ? (
+        <div className="w-full max-w-sm">
+          <Field label="Handed to" htmlFor="job-state-handed-to" hint="The name of the person who takes the blocks.">
+            <Input id="job-state-handed-to" name="handedTo" autoComplete="off" maxLength={200} required />
+          </Field>
+        </div>
+      ) : null}
       <div className="flex flex-wrap justify-end gap-2">
         {moves.length === 0 ? <p className="max-w-sm text-right text-sm text-graphite">{idle}</p> : null}
         {moves.map((move) => (

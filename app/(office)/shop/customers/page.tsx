@@ -71,7 +71,9 @@ export default async function CustomersPage({ searchParams }: { searchParams: Pr
                 rows.map((customer) => (
                   <tr key={customer.id} data-testid={`customer-row-${customer.name}`} className={customer.id === editing?.id ? "bg-accent-soft/60" : undefined}>
                     <Td className="font-medium">
-                      {customer.name}
+                      <Link href={`/shop/customers/${customer.id}`} className="text-accent-strong hover:underline">
+                        {customer.name}
+                      </Link>
                       {customer.notes ? <span className="block max-w-md truncate text-xs font-normal text-pencil">{customer.notes}</span> : null}
                     </Td>
                     <Td className="text-graphite">{customer.email ?? <span className="text-pencil">–</span>}</Td>

@@ -8,5 +8,5 @@ import { jobStateChangeSchema } from "@/lib/jobs/schema";
 /** Moves a job to another state; 409 when the move is not allowed from where it is. */
 export const POST = apiRoute({ roles: OFFICE_ROLES, params: idParams("id"), body: jobStateChangeSchema }, async ({ user, params, body }) => {
   if (!(await getJob(user, params.id))) return apiError(404, "not_found", "No such job.");
-  return Response.json(await moveJob(user, params.id, body.to, { acknowledgeWarnings: body.acknowledgeWarnings }));
+  return Response.json(await moveJob(user, params.id, body.to, { acknowledgeWarnings: body.acknowledgeWarnings, handedTo: body.handedTo }));
 });
