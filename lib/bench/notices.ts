@@ -38,15 +38,18 @@ export async function sendSignOffNotices(outcome: SignOffOutcome): Promise<void>
   const tuner = await getJobTuner(outcome.jobId);
   if (!tuner) return;
   const link = `${getEnv().APP_BASE_URL}/jobs/${outcome.jobId}`;
+  // The record is read once even when both messages carry it (the last sign-off, outside plan).
+  let record: Promise<string> | undefined;
+  const summaryOnce = () => (record ??= benchSummary(outcome.jobId));
   if (outcome.failed.length) {
     await sendMailSafely({
       to: [tuner.email],
       subject: `${tuner.number}: measurement outside plan at "${outcome.operationTitle}"`,
-      text: `${outcome.failed.map((f) => f.label).join(", ")} fell outside plan. The job stays in machining until it is resolved.\n\n${link}\n\n${await benchSummary(outcome.jobId)}`,
+      text: `${outcome.failed.map((f) => f.label).join(", ")} fell outside plan. The job stays in machining until it is resolved.\n\n${link}\n\n${await summaryOnce()}`,
     });
   }
   if (!outcome.allSigned) return;
-  const summary = await benchSummary(outcome.jobId);
+  const summary = await summaryOnce();
   await sendMailSafely({
     to: [tuner.email],
     subject: outcome.verified
