@@ -34,7 +34,8 @@ export async function benchSummary(jobId: string): Promise<string> {
 }
 
 export async function sendSignOffNotices(outcome: SignOffOutcome): Promise<void> {
-  if (!outcome.recorded) return;
+  // Most sign-offs call for no message: nothing to look up then.
+  if (!outcome.recorded || (outcome.failed.length === 0 && !outcome.allSigned)) return;
   const tuner = await getJobTuner(outcome.jobId);
   if (!tuner) return;
   const link = `${getEnv().APP_BASE_URL}/jobs/${outcome.jobId}`;
