@@ -35,23 +35,38 @@ export function travelerKey(data: TravelerData, options: TravelerOptions): Store
   return { key, etag: `"${digest}"` };
 }
 
+// Renders under way in this process, by key: downloads of a traveler not stored yet wait for the one render
+// instead of each starting its own (a release's mail and a first download, or several phones at once).
+const rendering = new Map<string, Promise<Uint8Array>>();
+
 /**
  * The traveler's PDF: the stored file, or rendered and stored on a miss. A store that cannot be reached does
  * not stop the print: the file is rendered, served and the failure logged.
  */
 export async function storedTravelerPdf(data: TravelerData, options: TravelerOptions): Promise<StoredTraveler & { pdf: Uint8Array }> {
   const stored = travelerKey(data, options);
+  const under = rendering.get(stored.key);
+  if (under) return { ...stored, pdf: await under };
   try {
     const found = await getObject(stored.key);
     if (found) return { ...stored, pdf: found.body };
   } catch (error) {
     log.warn({ err: error, key: stored.key }, "traveler store not read; rendering");
   }
+  let render = rendering.get(stored.key);
+  if (!render) {
+    render = renderAndStore(stored.key, data, options).finally(() => rendering.delete(stored.key));
+    rendering.set(stored.key, render);
+  }
+  return { ...stored, pdf: await render };
+}
+
+async function renderAndStore(key: string, data: TravelerData, options: TravelerOptions): Promise<Uint8Array> {
   const pdf = await renderTravelerPdf(data, options);
   try {
-    await putObject(stored.key, pdf, "application/pdf");
+    await putObject(key, pdf, "application/pdf");
   } catch (error) {
-    log.warn({ err: error, key: stored.key }, "traveler rendered but not stored");
+    log.warn({ err: error, key }, "traveler rendered but not stored");
   }
-  return { ...stored, pdf: new Uint8Array(pdf.buffer, pdf.byteOffset, pdf.byteLength) };
+  return new Uint8Array(pdf.buffer, pdf.byteOffset, pdf.byteLength);
 }

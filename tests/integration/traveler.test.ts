@@ -8,7 +8,7 @@ import { promisify } from "node:util";
 import { asc, eq } from "drizzle-orm";
 import jsQR from "jsqr";
 import { PNG } from "pngjs";
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 import { GET as travelerRoute } from "@/app/api/blocks/[blockId]/traveler/route";
 import { renderTravelerPdf } from "@/lib/traveler/pdf/render-traveler";
 import { approveRevision } from "@/lib/jobs/approve";
@@ -19,6 +19,13 @@ import type { TravelerData } from "@/lib/traveler/types";
 import { actAs, resetDatabase, testDb } from "./support/database";
 import { startS3Fake, type S3Fake } from "./support/fakes";
 import { blockIdOf, makeJob } from "./support/jobs";
+
+// The renderer, watched: a stored traveler must not be rendered again.
+vi.mock("@/lib/traveler/pdf/render-traveler", async (importOriginal) => {
+  const original = await importOriginal<typeof import("@/lib/traveler/pdf/render-traveler")>();
+  return { ...original, renderTravelerPdf: vi.fn(original.renderTravelerPdf) };
+});
+const renders = () => vi.mocked(renderTravelerPdf).mock.calls.length;
 
 // The base URL the QR code must carry: set here, before anything reads the configuration.
 const BASE_URL = "https://bench.blockwright.test";
@@ -227,6 +234,7 @@ describe("the stored traveler", () => {
   it("renders a revision's traveler once: a second download is the same file with the same ETag", async () => {
     const blockId = await blockIdOf((await makeJob("released")).id);
     await actAs("machinist");
+    const before = renders();
     const first = await getTraveler(blockId);
     expect(first.status).toBe(200);
     const etag = first.headers.get("etag");
@@ -237,9 +245,22 @@ describe("the stored traveler", () => {
     const second = await getTraveler(blockId);
     expect(second.status).toBe(200);
     expect(second.headers.get("etag")).toBe(etag);
-    // The print time is on the page: a second render would differ from the first in those bytes.
+    // The stored file itself, not a new render of the same revision.
     expect(Buffer.from(await second.arrayBuffer()).equals(firstBytes)).toBe(true);
     expect(storedTravelers(blockId)).toHaveLength(1);
+    expect(renders() - before).toBe(1);
+  });
+
+  it("renders once for downloads that arrive together before the file is stored", async () => {
+    const blockId = await blockIdOf((await makeJob("released")).id);
+    await actAs("machinist");
+    const before = renders();
+    const [a, b, c] = await Promise.all([getTraveler(blockId), getTraveler(blockId), getTraveler(blockId)]);
+    const bytes = await Promise.all([a!, b!, c!].map(async (r) => Buffer.from(await r.arrayBuffer())));
+    expect(bytes[1]!.equals(bytes[0]!)).toBe(true);
+    expect(bytes[2]!.equals(bytes[0]!)).toBe(true);
+    expect(storedTravelers(blockId)).toHaveLength(1);
+    expect(renders() - before).toBe(1);
   });
 
   it("answers 304 without a body when the caller already holds the file, and keeps one file per paper size", async () => {
@@ -248,8 +269,10 @@ describe("the stored traveler", () => {
     const first = await getTraveler(blockId);
     const etag = first.headers.get("etag")!;
     await first.arrayBuffer();
+    const before = renders();
     const again = await getTraveler(blockId, "", { "if-none-match": etag });
     expect(again.status).toBe(304);
+    expect(renders()).toBe(before);
     expect(again.headers.get("etag")).toBe(etag);
     expect(await again.text()).toBe("");
     // RFC 9110 13.1.2: If-None-Match compares weakly.
