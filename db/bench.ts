@@ -6,9 +6,9 @@ import { RequestRefusal } from "@/db/refusal";
 import { recordAudit } from "./audit";
 import { getDb } from "./client";
 import { lockJob } from "./jobs";
-import { maySeeJob, type Viewer } from "./visibility";
+import { maySeeJob, visibleJobsWhere, type Viewer } from "./visibility";
 import { revisionNameColumns } from "./revision-names";
-import { currentRevisionComplete } from "./revisions";
+import { currentRevisionComplete, revisionProgress, revisionProgressColumns } from "./revisions";
 import { attachments, jobs, measurementAmendments, measurements, meteringBlocks, operations, planRevisions, signOffs, users } from "./schema";
 
 export interface BenchOperation {
@@ -165,14 +165,28 @@ export async function signOffOperation(
   },
 ): Promise<SignOffOutcome> {
   return getDb().transaction(async (tx) => {
+    // One statement finds the operation, its revision and its job, applies the viewer's visibility (a hidden
+    // job reads as a missing operation) and locks the job row: concurrent sign-offs of the job queue here.
     const [op] = await tx
-      .select({ op: operations, revisionStatus: planRevisions.status, revisionNumber: planRevisions.number, jobId: planRevisions.jobId })
+      .select({
+        title: operations.title,
+        measurements: operations.measurements,
+        revisionId: planRevisions.id,
+        revisionStatus: planRevisions.status,
+        revisionNumber: planRevisions.number,
+        jobId: jobs.id,
+        jobNumber: jobs.number,
+        jobState: jobs.state,
+        currentRevision: jobs.currentRevision,
+        tunerId: jobs.tunerId,
+      })
       .from(operations)
       .innerJoin(planRevisions, eq(planRevisions.id, operations.revisionId))
-      .where(eq(operations.id, input.operationId));
+      .innerJoin(jobs, eq(jobs.id, planRevisions.jobId))
+      .where(and(eq(operations.id, input.operationId), visibleJobsWhere(viewer)))
+      .for("update", { of: jobs });
     if (!op) throw new RequestRefusal(404, "No such operation.", "operationId");
-    const job = await lockJob(tx, op.jobId);
-    if (!maySeeJob(viewer, job.state)) throw new RequestRefusal(404, "No such operation.", "operationId");
+    const job = { id: op.jobId, number: op.jobNumber, state: op.jobState, currentRevision: op.currentRevision, tunerId: op.tunerId };
     if (op.revisionStatus !== "current" || op.revisionNumber !== job.currentRevision) {
       throw new RequestRefusal(409, `Revision ${op.revisionNumber} is superseded: work from revision ${job.currentRevision}.`, "operationId");
     }
@@ -183,12 +197,16 @@ export async function signOffOperation(
     if (job.state !== "released" && job.state !== "machining") {
       throw new RequestRefusal(409, `The job is ${job.state}: only released work is signed at the bench.`, "operationId");
     }
-    const [existing] = await tx.select({ id: signOffs.id }).from(signOffs).where(eq(signOffs.operationId, input.operationId));
-    if (existing) {
-      const progress = await currentRevisionComplete(tx, job.id, job.currentRevision);
-      return { recorded: false, operationTitle: op.op.title, jobId: job.id, jobState: job.state, failed: [], allSigned: progress.allSigned, verified: false };
+    // After the lock, in a statement of its own (it sees sign-offs committed while it waited): a repeat and
+    // the revision's progress in one round trip.
+    const [already] = await tx
+      .select({ signed: sql<boolean>`EXISTS (SELECT 1 FROM sign_offs s WHERE s.operation_id = ${input.operationId})`, ...revisionProgressColumns(sql`${op.revisionId}`) })
+      .from(sql`(SELECT 1) AS one`);
+    if (already?.signed) {
+      const progress = revisionProgress(already);
+      return { recorded: false, operationTitle: op.title, jobId: job.id, jobState: job.state, failed: [], allSigned: progress.allSigned, verified: false };
     }
-    const planned = op.op.measurements as PlannedMeasurement[];
+    const planned = op.measurements as PlannedMeasurement[];
     const failed: { key: string; label: string }[] = [];
     const rows = planned.map((m) => {
       const value = input.measurements[m.key];
@@ -207,16 +225,17 @@ export async function signOffOperation(
       .onConflictDoNothing({ target: signOffs.operationId })
       .returning({ id: signOffs.id });
     if (inserted.length === 0) {
-      return { recorded: false, operationTitle: op.op.title, jobId: job.id, jobState: job.state, failed: [], allSigned: false, verified: false };
+      return { recorded: false, operationTitle: op.title, jobId: job.id, jobState: job.state, failed: [], allSigned: false, verified: false };
     }
     if (rows.length) await tx.insert(measurements).values(rows).onConflictDoNothing();
     let state: JobState = job.state === "released" ? "machining" : job.state;
-    const progress = await currentRevisionComplete(tx, job.id, job.currentRevision);
+    const [counts] = await tx.select(revisionProgressColumns(sql`${op.revisionId}`)).from(sql`(SELECT 1) AS one`);
+    const progress = revisionProgress(counts!);
     const verified = progress.complete;
     if (verified) state = "verified";
     if (state !== job.state) await tx.update(jobs).set({ state, updatedAt: new Date() }).where(eq(jobs.id, job.id));
     await recordAudit(tx, viewer.id, "operation.sign", input.operationId, { job: job.number, failed: failed.map((f) => f.key), state });
-    return { recorded: true, operationTitle: op.op.title, jobId: job.id, jobState: state, failed, allSigned: progress.allSigned, verified };
+    return { recorded: true, operationTitle: op.title, jobId: job.id, jobState: state, failed, allSigned: progress.allSigned, verified };
   });
 }
 

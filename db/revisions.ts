@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, count, eq, inArray } from "drizzle-orm";
+import { and, asc, eq, inArray, sql, type SQL } from "drizzle-orm";
 import type { ConversionPlan } from "@/lib/engineering/conversion-plan";
 import { canMove, type JobState } from "@/db/job-states";
 import { RequestRefusal } from "@/db/refusal";
@@ -8,7 +8,7 @@ import { namesAtApproval, revisionNameColumns, withReleasedBy, type RevisionName
 import { getDb, type Executor } from "./client";
 import { lockJob, type BlockRow } from "./jobs";
 import type { Viewer } from "./visibility";
-import { deliveries, enrichmentStages, jobs, measurements, meteringBlocks, operations, planRevisions, signOffs, type Job } from "./schema";
+import { deliveries, enrichmentStages, jobs, meteringBlocks, operations, planRevisions, type Job } from "./schema";
 
 /**
  * What an approved revision keeps forever: the inputs as they were, the plan solved from them, and the names it
@@ -89,30 +89,39 @@ export async function storeRevision(actor: Viewer, jobId: string, decide: (job: 
   });
 }
 
+export interface RevisionProgress {
+  complete: boolean;
+  allSigned: boolean;
+  failed: number;
+}
+
+/**
+ * The three counts of a revision's bench record as SQL columns, for one revision id (a bound value or a
+ * qualified column). Written with aliases: inside a subquery an unqualified "id" would name the wrong table.
+ */
+export function revisionProgressColumns(revisionId: SQL) {
+  return {
+    operationCount: sql<number>`(SELECT count(*)::int FROM operations o WHERE o.revision_id = ${revisionId})`,
+    signedCount: sql<number>`(SELECT count(*)::int FROM sign_offs s INNER JOIN operations o ON o.id = s.operation_id WHERE o.revision_id = ${revisionId})`,
+    failedCount: sql<number>`(SELECT count(*)::int FROM measurements m INNER JOIN operations o ON o.id = m.operation_id WHERE o.revision_id = ${revisionId} AND NOT m.passed)`,
+  };
+}
+
+/** Reads the counts selected with `revisionProgressColumns`. */
+export function revisionProgress(counts: { operationCount: number; signedCount: number; failedCount: number }): RevisionProgress {
+  const allSigned = counts.operationCount > 0 && counts.operationCount === counts.signedCount;
+  return { complete: allSigned && counts.failedCount === 0, allSigned, failed: counts.failedCount };
+}
+
 /** Whether every operation of the revision is signed, and whether every measurement passed too. */
-export async function currentRevisionComplete(
-  db: Executor,
-  jobId: string,
-  revision: number,
-): Promise<{ complete: boolean; allSigned: boolean; failed: number }> {
-  const [rev] = await db
-    .select({ id: planRevisions.id })
+export async function currentRevisionComplete(db: Executor, jobId: string, revision: number): Promise<RevisionProgress> {
+  // One round trip: the revision and its three counts together.
+  const [row] = await db
+    .select(revisionProgressColumns(sql.raw(`"plan_revisions"."id"`)))
     .from(planRevisions)
     .where(and(eq(planRevisions.jobId, jobId), eq(planRevisions.number, revision)));
-  if (!rev) return { complete: false, allSigned: false, failed: 0 };
-  const [ops] = await db.select({ n: count() }).from(operations).where(eq(operations.revisionId, rev.id));
-  const [signed] = await db
-    .select({ n: count() })
-    .from(signOffs)
-    .innerJoin(operations, eq(operations.id, signOffs.operationId))
-    .where(eq(operations.revisionId, rev.id));
-  const [failed] = await db
-    .select({ n: count() })
-    .from(measurements)
-    .innerJoin(operations, eq(operations.id, measurements.operationId))
-    .where(and(eq(operations.revisionId, rev.id), eq(measurements.passed, false)));
-  const allSigned = (ops?.n ?? 0) > 0 && ops?.n === signed?.n;
-  return { complete: allSigned && (failed?.n ?? 0) === 0, allSigned, failed: failed?.n ?? 0 };
+  if (!row) return { complete: false, allSigned: false, failed: 0 };
+  return revisionProgress(row);
 }
 
 /**

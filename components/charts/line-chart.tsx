@@ -10,6 +10,9 @@ export interface ChartLine {
   points: readonly (readonly [number, number])[];
   color: string;
   dashed?: boolean;
+  /** Drawn as steps (the value holds until the next point), e.g. area that opens at a valve's setting. */
+  step?: boolean;
+  width?: number;
 }
 
 export interface ChartPoint {
@@ -24,6 +27,22 @@ export interface ChartPoint {
 export interface ChartMarker {
   x: number;
   label: string;
+  color?: string;
+  /** Solid instead of dotted (a fixed reference such as the atmosphere). */
+  solid?: boolean;
+  /** A dot on the marker line at this value (where a curve stands there). */
+  dotY?: number | undefined;
+}
+
+/** A shaded span of the x axis (a zone of the chart), named by its label. */
+export interface ChartBand {
+  from: number;
+  to: number;
+  label: string;
+  color: string;
+  opacity?: number;
+  /** A class for the band's group, so tests and styles can find a kind of zone. */
+  className?: string;
 }
 
 const W = 640;
@@ -39,6 +58,11 @@ function ticks(lo: number, hi: number, count: number): number[] {
   return out;
 }
 
+function polylinePoints(points: readonly (readonly [number, number])[], step: boolean): (readonly [number, number])[] {
+  if (!step) return [...points];
+  return points.flatMap((p, i) => (i === 0 ? [p] : [[p[0], points[i - 1]![1]] as const, p]));
+}
+
 export function LineChart({
   title,
   description,
@@ -47,7 +71,13 @@ export function LineChart({
   lines,
   points,
   markers = [],
+  bands = [],
+  xDomain,
+  yDomain,
   yDecimals = 2,
+  xFormat = (x) => String(x),
+  legend = true,
+  leftMargin = M.left,
 }: {
   title: string;
   description: string;
@@ -56,15 +86,26 @@ export function LineChart({
   lines: readonly ChartLine[];
   points: readonly ChartPoint[];
   markers?: readonly ChartMarker[];
+  bands?: readonly ChartBand[];
+  /** The axes' ranges when the data should not set them (a sweep drawn over its whole span). */
+  xDomain?: readonly [number, number];
+  yDomain?: readonly [number, number];
   yDecimals?: number;
+  xFormat?: (x: number) => string;
+  /** The key under the chart; off when the page draws one key for several charts. */
+  legend?: boolean;
+  /** Room for the y axis's tick labels (wider figures such as 0.0045 need more). */
+  leftMargin?: number;
 }) {
+  const left = leftMargin;
   const xs = [...lines.flatMap((l) => l.points.map((p) => p[0])), ...points.map((p) => p.x), ...markers.map((m) => m.x)];
   const ys = [...lines.flatMap((l) => l.points.map((p) => p[1])), ...points.map((p) => p.y)];
   if (xs.length === 0 || ys.length === 0) return null;
-  const [x0, x1] = [Math.min(...xs), Math.max(...xs)];
+  const [x0, x1] = xDomain ?? [Math.min(...xs), Math.max(...xs)];
   const pad = (Math.max(...ys) - Math.min(...ys)) * 0.1 || 0.05;
-  const [y0, y1] = [Math.min(...ys) - pad, Math.max(...ys) + pad];
-  const sx = (x: number) => M.left + ((x - x0) / (x1 - x0 || 1)) * (W - M.left - M.right);
+  const [y0, y1] = yDomain ?? [Math.min(...ys) - pad, Math.max(...ys) + pad];
+  const clampX = (x: number) => Math.min(x1, Math.max(x0, x));
+  const sx = (x: number) => left + ((x - x0) / (x1 - x0 || 1)) * (W - left - M.right);
   const sy = (y: number) => H - M.bottom - ((y - y0) / (y1 - y0 || 1)) * (H - M.top - M.bottom);
   const id = title.replace(/[^a-z0-9]+/gi, "-").toLowerCase();
   return (
@@ -72,10 +113,25 @@ export function LineChart({
       <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-labelledby={`${id}-title ${id}-desc`} className="h-auto w-full max-w-3xl">
         <title id={`${id}-title`}>{title}</title>
         <desc id={`${id}-desc`}>{description}</desc>
+        {bands.map((b) => (
+          <g key={`b${b.from}-${b.label}`} className={b.className}>
+            <rect
+              x={sx(clampX(b.from))}
+              y={M.top}
+              width={Math.max(0, sx(clampX(b.to)) - sx(clampX(b.from)))}
+              height={H - M.top - M.bottom}
+              fill={b.color}
+              fillOpacity={b.opacity ?? 0.5}
+            />
+            <text x={(sx(clampX(b.from)) + sx(clampX(b.to))) / 2} y={H - M.bottom - 4} textAnchor="middle" fontSize="10" fill={GRAPHITE}>
+              {b.label}
+            </text>
+          </g>
+        ))}
         {ticks(y0, y1, 5).map((t) => (
           <g key={`y${t}`}>
-            <line x1={M.left} x2={W - M.right} y1={sy(t)} y2={sy(t)} stroke={RULE} />
-            <text x={M.left - 6} y={sy(t) + 4} textAnchor="end" fontSize="11" fill={GRAPHITE}>
+            <line x1={left} x2={W - M.right} y1={sy(t)} y2={sy(t)} stroke={RULE} />
+            <text x={left - 6} y={sy(t) + 4} textAnchor="end" fontSize="11" fill={GRAPHITE}>
               {t.toFixed(yDecimals)}
             </text>
           </g>
@@ -84,12 +140,12 @@ export function LineChart({
           <g key={`x${t}`}>
             <line x1={sx(t)} x2={sx(t)} y1={H - M.bottom} y2={H - M.bottom + 4} stroke={INK} />
             <text x={sx(t)} y={H - M.bottom + 16} textAnchor="middle" fontSize="11" fill={GRAPHITE}>
-              {t}
+              {xFormat(t)}
             </text>
           </g>
         ))}
-        <line x1={M.left} x2={W - M.right} y1={H - M.bottom} y2={H - M.bottom} stroke={INK} />
-        <text x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle" fontSize="12" fill={INK}>
+        <line x1={left} x2={W - M.right} y1={H - M.bottom} y2={H - M.bottom} stroke={INK} />
+        <text x={(left + W - M.right) / 2} y={H - 6} textAnchor="middle" fontSize="12" fill={INK}>
           {xLabel}
         </text>
         <text x={14} y={(M.top + H - M.bottom) / 2} textAnchor="middle" fontSize="12" fill={INK} transform={`rotate(-90 14 ${(M.top + H - M.bottom) / 2})`}>
@@ -97,8 +153,8 @@ export function LineChart({
         </text>
         {markers.map((m, i) => (
           <g key={`m${i}`}>
-            <line x1={sx(m.x)} x2={sx(m.x)} y1={M.top} y2={H - M.bottom} stroke={GRAPHITE} strokeDasharray="2 3" />
-            <text x={sx(m.x) + 3} y={M.top + 10 + (i % 3) * 12} fontSize="10" fill={GRAPHITE}>
+            <line x1={sx(m.x)} x2={sx(m.x)} y1={M.top} y2={H - M.bottom} stroke={m.color ?? GRAPHITE} strokeDasharray={m.solid ? undefined : "2 3"} />
+            <text x={sx(m.x) + 3} y={M.top + 10 + (i % 3) * 12} fontSize="10" fill={m.color ?? GRAPHITE}>
               {m.label}
             </text>
           </g>
@@ -106,19 +162,25 @@ export function LineChart({
         {lines.map((l) => (
           <polyline
             key={l.label}
-            points={l.points.map(([x, y]) => `${sx(x).toFixed(1)},${sy(y).toFixed(1)}`).join(" ")}
+            points={polylinePoints(l.points, l.step ?? false)
+              .map(([x, y]) => `${sx(x).toFixed(1)},${sy(y).toFixed(1)}`)
+              .join(" ")}
             fill="none"
             stroke={l.color}
-            strokeWidth={2}
+            strokeWidth={l.width ?? 2}
             strokeDasharray={l.dashed ? "6 4" : undefined}
           />
         ))}
+        {markers.map((m, i) =>
+          m.dotY === undefined ? null : <circle key={`md${i}`} cx={sx(m.x)} cy={sy(m.dotY)} r={4} fill={m.color ?? GRAPHITE} stroke="white" strokeWidth={1.5} />,
+        )}
         {points.map((p, i) => (
           <circle key={`p${i}`} cx={sx(p.x)} cy={sy(p.y)} r={4.5} fill={p.hollow ? "white" : p.color} stroke={p.color} strokeWidth={2}>
             <title>{p.label}</title>
           </circle>
         ))}
       </svg>
+      {legend ? (
       <figcaption className="flex flex-wrap gap-4 text-xs text-graphite">
         {lines.map((l) => (
           <span key={l.label} className="inline-flex items-center gap-1">
@@ -137,6 +199,7 @@ export function LineChart({
           </span>
         ) : null}
       </figcaption>
+      ) : null}
     </figure>
   );
 }

@@ -1,6 +1,7 @@
 import "server-only";
 import { getServerSession } from "next-auth";
 import { forbidden, redirect } from "next/navigation";
+import { cache } from "react";
 import { getSessionHolder, type UserSummary } from "@/db/users";
 import { isDatabaseUnavailable } from "@/db/faults";
 import type { UserRole } from "@/db/schema";
@@ -14,14 +15,16 @@ export type SessionUser = UserSummary;
 /**
  * The signed-in, still active user, or null. Role comes from the database, not from the cookie; the cookie's
  * session version must still be the user's (sign-out everywhere, a password change and deactivation raise it).
+ * Within one server render or action (a layout and its page both ask) the cookie is decoded and the user read
+ * once: React's request cache; a route handler asks once through apiRoute.
  */
-export async function getSessionUser(): Promise<SessionUser | null> {
+export const getSessionUser = cache(async function getSessionUser(): Promise<SessionUser | null> {
   const session = (await getServerSession(authOptions)) as { userId?: string; sessionVersion?: number } | null;
   const userId = session?.userId;
   // A token without a version predates session versions, or was forged without one: not a session.
   if (!userId || typeof session.sessionVersion !== "number") return null;
   return (await getSessionHolder(userId, session.sessionVersion)) ?? null;
-}
+});
 
 /**
  * For layouts: the session user (or null), or "database-down" while the database is not answering, so the layout

@@ -34,19 +34,23 @@ export async function benchSummary(jobId: string): Promise<string> {
 }
 
 export async function sendSignOffNotices(outcome: SignOffOutcome): Promise<void> {
-  if (!outcome.recorded) return;
+  // Most sign-offs call for no message: nothing to look up then.
+  if (!outcome.recorded || (outcome.failed.length === 0 && !outcome.allSigned)) return;
   const tuner = await getJobTuner(outcome.jobId);
   if (!tuner) return;
   const link = `${getEnv().APP_BASE_URL}/jobs/${outcome.jobId}`;
+  // The record is read once even when both messages carry it (the last sign-off, outside plan).
+  let record: Promise<string> | undefined;
+  const summaryOnce = () => (record ??= benchSummary(outcome.jobId));
   if (outcome.failed.length) {
     await sendMailSafely({
       to: [tuner.email],
       subject: `${tuner.number}: measurement outside plan at "${outcome.operationTitle}"`,
-      text: `${outcome.failed.map((f) => f.label).join(", ")} fell outside plan. The job stays in machining until it is resolved.\n\n${link}\n\n${await benchSummary(outcome.jobId)}`,
+      text: `${outcome.failed.map((f) => f.label).join(", ")} fell outside plan. The job stays in machining until it is resolved.\n\n${link}\n\n${await summaryOnce()}`,
     });
   }
   if (!outcome.allSigned) return;
-  const summary = await benchSummary(outcome.jobId);
+  const summary = await summaryOnce();
   await sendMailSafely({
     to: [tuner.email],
     subject: outcome.verified

@@ -1,10 +1,10 @@
 import { z } from "zod";
 import { quantity } from "@/lib/forms/quantity/quantity";
+import { BENCH_LENGTH_UNITS, BENCH_PRESSURE_UNITS } from "./reading-units";
 
 // One sign-off from the bench: the readings the operation asks for, each with its unit, and a note.
 
-export const BENCH_LENGTH_UNITS = ["in", "mm"] as const;
-export const BENCH_PRESSURE_UNITS = ["psi", "kPa", "bar"] as const;
+export { BENCH_LENGTH_UNITS, BENCH_PRESSURE_UNITS };
 
 const reading = z
   .object({ key: z.string().min(1).max(40) })
@@ -16,6 +16,8 @@ export const signOffSchema = z.object({
   readings: z.array(reading).max(8).default([]),
 });
 export type SignOffInput = z.output<typeof signOffSchema>;
+/** The form's fields as typed (before the schema parses them). */
+export type SignOffFields = z.input<typeof signOffSchema>;
 
 /** A correction of a signed operation's readings: the readings as they should have been, and why. */
 export const amendSignOffSchema = z.object({

@@ -4,12 +4,15 @@ import { getEnv } from "./env";
 import { log } from "./log";
 import { seal, unseal, type Sealed } from "./mail-seal";
 import { deliverMail, type MailAttachment, type Message } from "./mail-transport";
+import type { Viewer } from "@/db/visibility";
 
 // Outgoing mail waits in a pg-boss queue kept in PostgreSQL (schema pgboss, made by pg-boss itself on first
 // start): a request only inserts a row, and the worker started with the server (instrumentation.ts) sends it,
 // trying again with a doubling wait while the SMTP server is down. A restart loses nothing.
 
 export const MAIL_QUEUE = "mail";
+/** Travelers of a released revision, rendered and stored off the request path; the release mail follows. */
+export const TRAVELER_RENDER_QUEUE = "traveler-render";
 const SCHEMA = "pgboss";
 
 interface QueuedMail {
@@ -26,7 +29,9 @@ interface SealedBody {
 
 // One instance per process, kept on globalThis: Next loads instrumentation and the routes as separate bundles,
 // and each would otherwise open its own pool.
-const held = globalThis as typeof globalThis & { blockwrightMailQueue?: { boss?: Promise<PgBoss>; worker?: Promise<string> } };
+const held = globalThis as typeof globalThis & {
+  blockwrightMailQueue?: { boss?: Promise<PgBoss>; worker?: Promise<string>; renderWorker?: Promise<string> };
+};
 const state = (held.blockwrightMailQueue ??= {});
 
 function queue(): Promise<PgBoss> {
@@ -36,6 +41,7 @@ function queue(): Promise<PgBoss> {
     boss.on("error", (error) => log.error({ err: error }, "mail queue"));
     await boss.start();
     await boss.createQueue(MAIL_QUEUE);
+    await boss.createQueue(TRAVELER_RENDER_QUEUE);
     return boss;
   })().catch((error: unknown) => {
     state.boss = undefined;
@@ -89,11 +95,65 @@ export function startMailWorker(): Promise<string> {
   return state.worker;
 }
 
+/** What the render queue carries: who released which revision of which job. */
+export interface TravelerRenderRequest {
+  actor: Viewer;
+  jobId: string;
+  revision: number;
+}
+
+/** Queues the renders of a released revision's travelers; the worker started below does them. */
+export async function enqueueTravelerRender(request: TravelerRenderRequest): Promise<string> {
+  const env = getEnv();
+  const id = await (await queue()).send(TRAVELER_RENDER_QUEUE, request, {
+    retryLimit: env.MAIL_RETRY_LIMIT,
+    retryDelay: env.MAIL_RETRY_DELAY_SECONDS,
+    retryBackoff: true,
+  });
+  if (!id) throw new Error("the traveler queue did not accept the renders");
+  return id;
+}
+
+/**
+ * Starts sending queued mail and rendering queued travelers in this process (the server's start, and tests);
+ * `render` is the workflow's (lib/jobs), which this plumbing does not import. A second call does nothing.
+ */
+export async function startQueueWorkers(render: (request: TravelerRenderRequest) => Promise<void>): Promise<string[]> {
+  state.renderWorker ??= (async () => {
+    const boss = await queue();
+    return boss.work<TravelerRenderRequest>(TRAVELER_RENDER_QUEUE, { pollingIntervalSeconds: getEnv().MAIL_POLL_SECONDS }, async (jobs) => {
+      for (const job of jobs) {
+        try {
+          await render(job.data);
+        } catch (error) {
+          log.warn({ err: error, job: job.id, jobId: job.data.jobId }, "travelers not rendered yet");
+          throw error;
+        }
+      }
+    });
+  })().catch((error: unknown) => {
+    state.renderWorker = undefined;
+    throw error;
+  });
+  return Promise.all([startMailWorker(), state.renderWorker]);
+}
+
+/** Renders still queued or under way (tests wait for them). */
+export async function pendingTravelerRenders(): Promise<number> {
+  const boss = await queue();
+  const { rows } = await boss.getDb().executeSql(
+    `SELECT count(*)::int AS pending FROM ${SCHEMA}.job WHERE name = $1 AND state IN ('created', 'retry', 'active')`,
+    [TRAVELER_RENDER_QUEUE],
+  );
+  return (rows as { pending: number }[])[0]?.pending ?? 0;
+}
+
 /** Stops the worker and closes the queue's connections (tests, shutdown). */
 export async function stopMailQueue(): Promise<void> {
   const boss = state.boss;
   state.boss = undefined;
   state.worker = undefined;
+  state.renderWorker = undefined;
   if (boss) await (await boss).stop({ graceful: true, wait: true, timeout: 5000 });
 }
 

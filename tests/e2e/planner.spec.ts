@@ -73,8 +73,8 @@ test("a tuner plans, approves and releases a job; the machinist reads it; an edi
 
   // The plan: hole layouts per stage, the fuel curve for part and full throttle.
   await expect(page).toHaveURL(new RegExp(`/jobs/${jobId}$`));
-  await expect(page.getByTestId("staging-chart-part").locator("svg.recharts-surface")).toBeVisible();
-  await expect(page.getByTestId("staging-chart-full").locator("svg.recharts-surface")).toBeVisible();
+  await expect(page.getByTestId("staging-chart-part").locator("svg[role=img]")).toBeVisible();
+  await expect(page.getByTestId("staging-chart-full").locator("svg[role=img]")).toBeVisible();
   await expect(page.getByRole("table", { name: "Primary and secondary balance" })).toBeVisible();
   await expect(page.getByRole("note", { name: /WARNING: Grinding/ })).toBeVisible();
   await expect(page.getByRole("note", { name: /WARNING: Pressurized fuel bowls/ })).toBeVisible();
@@ -124,7 +124,7 @@ test("a tuner plans, approves and releases a job; the machinist reads it; an edi
   await openSignedIn(bench, "machinist");
   await new JobPage(bench).open(jobId);
   await expect(bench.getByTestId("job-state")).toHaveText("released");
-  await expect(bench.getByTestId("staging-chart-full").locator("svg.recharts-surface")).toBeVisible();
+  await expect(bench.getByTestId("staging-chart-full").locator("svg[role=img]")).toBeVisible();
   await expect(bench.getByRole("link", { name: /Edit/ })).toHaveCount(0);
   await expect(bench.getByRole("button", { name: /Use |Approve|Release|Reopen/ })).toHaveCount(0);
   await expect(bench.getByRole("form", { name: "Job state" })).toHaveCount(0);

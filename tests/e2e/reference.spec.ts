@@ -115,8 +115,8 @@ test("the staging calculator charts a lean zone and proposes setpoints", async (
   await form.getByRole("button", { name: "Draw the chart" }).click();
 
   const full = page.getByTestId("staging-chart-full");
-  await expect(full.locator("svg.recharts-surface")).toBeVisible();
-  await expect(full.locator(".recharts-reference-area").first()).toBeAttached();
+  await expect(full.locator("svg[role=img]")).toBeVisible();
+  await expect(full.locator("g.zone-lean").first()).toBeAttached();
   await expect(page.getByTestId("zones-full")).toContainText("Lean");
   await expect(full).toContainText("8.0 psi boost");
   await expect(page.getByTestId("staging-chart-part")).toContainText("6.5 inHg vacuum");

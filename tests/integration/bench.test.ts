@@ -1,3 +1,4 @@
+import path from "node:path";
 import sharp from "sharp";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { and, eq } from "drizzle-orm";
@@ -153,17 +154,21 @@ describe("signing operations off at the bench", () => {
 });
 
 describe("releasing a job", () => {
-  it("sends every active machinist the block travelers of the released revision", async () => {
+  it("sends every active machinist the block travelers of the released revision, rendered off the request and stored in both paper sizes", async () => {
     const job = await makeJob("planned");
     await actAs("tuner");
     const response = await stateRoute(jsonRequest(`/api/jobs/${job.id}/state`, "POST", { to: "released" }), { params: Promise.resolve({ id: job.id }) });
     expect(response.status).toBe(200);
+    // The request only queued the renders; the worker renders, stores and then mails.
+    await mailSettled(30_000);
     await waitForMail(1);
     const notice = mail.messages.find((m) => m.subject?.includes("released"));
     expect(JSON.stringify(notice?.to)).toContain("machinist@blockwright.test");
     expect(notice?.attachments.map((a) => a.filename).sort()).toEqual([`${job.number}-primary-rev1.pdf`, `${job.number}-secondary-rev1.pdf`]);
     expect(notice?.attachments.every((a) => a.content.subarray(0, 5).toString() === "%PDF-")).toBe(true);
     expect(notice?.text).toContain(`/bench/`);
+    // Two blocks, letter and A4 each: the download route finds them stored.
+    expect(s3.storedObjects().filter((file) => file.includes(`${path.sep}travelers${path.sep}`))).toHaveLength(4);
   });
 });
 

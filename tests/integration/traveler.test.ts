@@ -8,7 +8,7 @@ import { promisify } from "node:util";
 import { asc, eq } from "drizzle-orm";
 import jsQR from "jsqr";
 import { PNG } from "pngjs";
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 import { GET as travelerRoute } from "@/app/api/blocks/[blockId]/traveler/route";
 import { renderTravelerPdf } from "@/lib/traveler/pdf/render-traveler";
 import { approveRevision } from "@/lib/jobs/approve";
@@ -17,7 +17,15 @@ import * as schema from "@/db/schema";
 import { benchUrl } from "@/lib/bench/url";
 import type { TravelerData } from "@/lib/traveler/types";
 import { actAs, resetDatabase, testDb } from "./support/database";
+import { startS3Fake, type S3Fake } from "./support/fakes";
 import { blockIdOf, makeJob } from "./support/jobs";
+
+// The renderer, watched: a stored traveler must not be rendered again.
+vi.mock("@/lib/traveler/pdf/render-traveler", async (importOriginal) => {
+  const original = await importOriginal<typeof import("@/lib/traveler/pdf/render-traveler")>();
+  return { ...original, renderTravelerPdf: vi.fn(original.renderTravelerPdf) };
+});
+const renders = () => vi.mocked(renderTravelerPdf).mock.calls.length;
 
 // The base URL the QR code must carry: set here, before anything reads the configuration.
 const BASE_URL = "https://bench.blockwright.test";
@@ -25,20 +33,27 @@ process.env.APP_BASE_URL = BASE_URL;
 
 const run = promisify(execFile);
 let dir: string;
+let s3: S3Fake;
 
 beforeAll(async () => {
   dir = await mkdtemp(path.join(tmpdir(), "blockwright-traveler-"));
+  // Rendered travelers are kept in the object store.
+  s3 = await startS3Fake();
 });
 afterAll(async () => {
   await rm(dir, { recursive: true, force: true });
+  await s3.stop();
 });
 beforeEach(resetDatabase);
 
 const params = (blockId: string) => ({ params: Promise.resolve({ blockId }) });
 
-async function getTraveler(blockId: string, query = ""): Promise<Response> {
-  return travelerRoute(new Request(`http://127.0.0.1/api/blocks/${blockId}/traveler${query}`), params(blockId));
+async function getTraveler(blockId: string, query = "", headers: HeadersInit = {}): Promise<Response> {
+  return travelerRoute(new Request(`http://127.0.0.1/api/blocks/${blockId}/traveler${query}`, { headers }), params(blockId));
 }
+
+/** The traveler files in the object store for one block (the store lives as long as the file's tests). */
+const storedTravelers = (blockId: string) => s3.storedObjects().filter((file) => file.includes(`${path.sep}travelers${path.sep}${blockId}${path.sep}`));
 
 let fileCount = 0;
 async function savePdf(bytes: Uint8Array): Promise<string> {
@@ -212,6 +227,91 @@ describe("GET /api/blocks/{id}/traveler", () => {
   it("answers 401 to an anonymous caller before looking anything up", async () => {
     await actAs("anonymous");
     expect((await getTraveler("00000000-0000-4000-8000-000000000000")).status).toBe(401);
+  });
+});
+
+describe("the stored traveler", () => {
+  it("renders a revision's traveler once: a second download is the same file with the same ETag", async () => {
+    const blockId = await blockIdOf((await makeJob("released")).id);
+    await actAs("machinist");
+    const before = renders();
+    const first = await getTraveler(blockId);
+    expect(first.status).toBe(200);
+    const etag = first.headers.get("etag");
+    expect(etag).toMatch(/^"[0-9a-f]+"$/);
+    const firstBytes = Buffer.from(await first.arrayBuffer());
+    expect(storedTravelers(blockId)).toHaveLength(1);
+
+    const second = await getTraveler(blockId);
+    expect(second.status).toBe(200);
+    expect(second.headers.get("etag")).toBe(etag);
+    // The stored file itself, not a new render of the same revision.
+    expect(Buffer.from(await second.arrayBuffer()).equals(firstBytes)).toBe(true);
+    expect(storedTravelers(blockId)).toHaveLength(1);
+    expect(renders() - before).toBe(1);
+  });
+
+  it("renders once for downloads that arrive together before the file is stored", async () => {
+    const blockId = await blockIdOf((await makeJob("released")).id);
+    await actAs("machinist");
+    const before = renders();
+    const [a, b, c] = await Promise.all([getTraveler(blockId), getTraveler(blockId), getTraveler(blockId)]);
+    const bytes = await Promise.all([a!, b!, c!].map(async (r) => Buffer.from(await r.arrayBuffer())));
+    expect(bytes[1]!.equals(bytes[0]!)).toBe(true);
+    expect(bytes[2]!.equals(bytes[0]!)).toBe(true);
+    expect(storedTravelers(blockId)).toHaveLength(1);
+    expect(renders() - before).toBe(1);
+  });
+
+  it("answers 304 without a body when the caller already holds the file, and keeps one file per paper size", async () => {
+    const blockId = await blockIdOf((await makeJob("released")).id);
+    await actAs("tuner");
+    const first = await getTraveler(blockId);
+    const etag = first.headers.get("etag")!;
+    await first.arrayBuffer();
+    const before = renders();
+    const again = await getTraveler(blockId, "", { "if-none-match": etag });
+    expect(again.status).toBe(304);
+    expect(renders()).toBe(before);
+    expect(again.headers.get("etag")).toBe(etag);
+    expect(await again.text()).toBe("");
+    // RFC 9110 13.1.2: If-None-Match compares weakly.
+    expect((await getTraveler(blockId, "", { "if-none-match": `"other", W/${etag}` })).status).toBe(304);
+    expect((await getTraveler(blockId, "", { "if-none-match": `"other"` })).status).toBe(200);
+
+    const a4 = await getTraveler(blockId, "?paper=a4", { "if-none-match": etag });
+    expect(a4.status).toBe(200);
+    expect(a4.headers.get("etag")).not.toBe(etag);
+    expect(storedTravelers(blockId)).toHaveLength(2);
+  });
+
+  it("keeps another file for a revision once it is superseded: the banner changes", async () => {
+    const job = await makeJob("released");
+    const blockId = await blockIdOf(job.id);
+    const tuner = { id: (await actAs("tuner"))!, role: "tuner" as const };
+    const current = await getTraveler(blockId, "?revision=1");
+    const currentEtag = current.headers.get("etag")!;
+    expect(await pdfText(await savePdf(new Uint8Array(await current.arrayBuffer())))).not.toContain("SUPERSEDED");
+
+    await updateJob(tuner, job.id, { fields: { notes: "Came back lean at 7 psi." } });
+    await approveRevision(tuner, job.id);
+    const superseded = await getTraveler(blockId, "?revision=1", { "if-none-match": currentEtag });
+    expect(superseded.status).toBe(200);
+    expect(superseded.headers.get("etag")).not.toBe(currentEtag);
+    expect(await pdfText(await savePdf(new Uint8Array(await superseded.arrayBuffer())))).toContain("SUPERSEDED — DO NOT USE");
+    expect(storedTravelers(blockId)).toHaveLength(2);
+  });
+
+  it("still answers 404 to a machinist for a block not yet released, even with a stored file and its ETag", async () => {
+    const blockId = await blockIdOf((await makeJob("planned")).id);
+    await actAs("tuner");
+    const office = await getTraveler(blockId);
+    expect(office.status).toBe(200);
+    const etag = office.headers.get("etag")!;
+    await actAs("machinist");
+    const hidden = await getTraveler(blockId, "", { "if-none-match": etag });
+    expect(hidden.status).toBe(404);
+    expect((await hidden.json()).error.code).toBe("not_found");
   });
 });
 

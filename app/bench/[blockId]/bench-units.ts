@@ -2,7 +2,7 @@
 // tolerance in the unit they chose, and the total area of gauged restriction holes. The server converts
 // again with lib/engineering/units (mathjs) and decides; what the phone shows is a preview of that.
 
-import { BENCH_LENGTH_UNITS, BENCH_PRESSURE_UNITS } from "@/lib/bench/sign-off-schema";
+import { BENCH_LENGTH_UNITS, BENCH_PRESSURE_UNITS } from "@/lib/bench/reading-units";
 import { M2_PER_IN2, M2_PER_MM2, M_PER_IN, M_PER_MM, PA_PER_BAR, PA_PER_KPA, PA_PER_PSI } from "@/lib/engineering/unit-factors";
 
 export type BenchLengthUnit = (typeof BENCH_LENGTH_UNITS)[number];

@@ -1,11 +1,11 @@
 "use client";
 
 import { getTextareaProps } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
 import type { BenchOperation } from "@/db/bench";
 import { useServerForm } from "@/components/forms/use-server-form";
 import type { FormResult } from "@/lib/forms/form-action";
-import { signOffSchema } from "@/lib/bench/sign-off-schema";
+import { checkSignOff } from "@/lib/bench/sign-off-check";
+import type { SignOffFields, SignOffInput } from "@/lib/bench/sign-off-schema";
 import { signOffAction, type SignOffResult } from "../actions";
 import { defaultUnit, parseReading, type BenchUnit } from "../bench-units";
 import { PhotoControl } from "../photo-control";
@@ -23,7 +23,7 @@ async function signOffOnce(previous: FormResult<SignOffResult> | undefined, form
  * with it. Kept by the card, whose signed summary reads the answer after the page refreshes.
  */
 export function useSignOffForm(operation: BenchOperation) {
-  return useServerForm(signOffOnce, {
+  return useServerForm<SignOffFields, SignOffInput, SignOffResult>(signOffOnce, {
     id: `sign-off-${operation.id}`,
     defaultValue: {
       operationId: operation.id,
@@ -32,7 +32,8 @@ export function useSignOffForm(operation: BenchOperation) {
     },
     shouldValidate: "onSubmit",
     shouldRevalidate: "onInput",
-    onValidate: ({ formData }) => parseWithZod(formData, { schema: signOffSchema }),
+    // A small check on the phone (empty or garbled boxes); the server validates the whole sign-off.
+    onValidate: ({ formData }) => checkSignOff(formData),
   });
 }
 
