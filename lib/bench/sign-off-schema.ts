@@ -30,3 +30,5 @@ export const amendSignOffSchema = z.object({
   readings: z.array(reading, { error: "readings must be a list of { key, value, unit }." }).min(1, { error: "Give the corrected reading." }).max(8),
 });
 export type AmendSignOffInput = z.output<typeof amendSignOffSchema>;
+/** The correction form's fields as typed. */
+export type AmendSignOffFields = z.input<typeof amendSignOffSchema>;

@@ -1,27 +1,18 @@
 // Outgoing mail waits in a queue in PostgreSQL: an action succeeds while the SMTP server is down, the message is
 // tried again with a growing wait, and it is delivered once the server answers. The admin sees each message's state.
-import { createServer, type AddressInfo } from "node:net";
 import { eq, sql } from "drizzle-orm";
 import { renderToStaticMarkup } from "react-dom/server";
-import { simpleParser, type ParsedMail } from "mailparser";
-import { SMTPServer } from "smtp-server";
+import type { ParsedMail } from "mailparser";
+import type { SMTPServer } from "smtp-server";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { POST as sendResetRoute } from "@/app/api/users/[id]/password-reset/route";
 import { POST as changePasswordRoute } from "@/app/api/account/password/route";
 import MailQueuePage from "@/app/(office)/shop/outbox/queue/page";
 import { listMailQueue, type MailQueueEntry } from "@/lib/server/mail-queue";
 import * as schema from "@/db/schema";
+import { closedPort, listenForMail } from "./support/fakes";
 import { actAs, jsonRequest, resetDatabase, testDb } from "./support/database";
 import { startMailWorker } from "./support/mail-queue";
-
-/** A loopback port nothing listens on (yet): taken from the system, then let go. */
-async function closedPort(): Promise<number> {
-  const probe = createServer();
-  await new Promise<void>((resolve) => probe.listen(0, "127.0.0.1", resolve));
-  const { port } = probe.address() as AddressInfo;
-  await new Promise((resolve) => probe.close(resolve));
-  return port;
-}
 
 // Before the configuration is first read: SMTP points at a port where nothing answers, and a message gets three
 // tries (two retries) after which it fails.
@@ -36,17 +27,7 @@ const received: ParsedMail[] = [];
 let smtp: SMTPServer | undefined;
 
 async function smtpUp(): Promise<void> {
-  smtp = new SMTPServer({
-    authOptional: true,
-    disabledCommands: ["STARTTLS"],
-    logger: false,
-    onData(stream, _session, callback) {
-      simpleParser(stream)
-        .then((mail) => received.push(mail))
-        .finally(() => callback());
-    },
-  });
-  await new Promise<void>((resolve) => smtp!.listen(smtpPort, "127.0.0.1", resolve));
+  smtp = await listenForMail(smtpPort, received);
 }
 
 async function smtpDown(): Promise<void> {

@@ -1,26 +1,17 @@
 // A release while the SMTP server is down: the job is released all the same, its notice waits in the mail queue
 // with the reason it was not sent, and once the server answers on that port the machinists get it, travelers
 // attached.
-import { createServer, type AddressInfo } from "node:net";
 import { eq } from "drizzle-orm";
-import { simpleParser, type ParsedMail } from "mailparser";
-import { SMTPServer } from "smtp-server";
+import type { ParsedMail } from "mailparser";
+import type { SMTPServer } from "smtp-server";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import * as schema from "@/db/schema";
 import { moveJob } from "@/lib/jobs/moves";
 import { listMailQueue, type MailQueueEntry } from "@/lib/server/mail-queue";
+import { closedPort, listenForMail } from "./support/fakes";
 import { actAs, resetDatabase, testDb } from "./support/database";
 import { makeJob } from "./support/jobs";
 import { startMailWorker } from "./support/mail-queue";
-
-/** A loopback port nothing listens on (yet): taken from the system, then let go. */
-async function closedPort(): Promise<number> {
-  const probe = createServer();
-  await new Promise<void>((resolve) => probe.listen(0, "127.0.0.1", resolve));
-  const { port } = probe.address() as AddressInfo;
-  await new Promise((resolve) => probe.close(resolve));
-  return port;
-}
 
 // Before the configuration is first read: SMTP points at a port where nothing answers yet. Retries every 1, 2,
 // 4, 8 s (MAIL_RETRY_DELAY_SECONDS=1 from setup.ts, doubling), so the message is still waiting when the server comes up.
@@ -33,17 +24,7 @@ const received: ParsedMail[] = [];
 let smtp: SMTPServer | undefined;
 
 async function smtpUp(): Promise<void> {
-  smtp = new SMTPServer({
-    authOptional: true,
-    disabledCommands: ["STARTTLS"],
-    logger: false,
-    onData(stream, _session, callback) {
-      simpleParser(stream)
-        .then((mail) => received.push(mail))
-        .finally(() => callback());
-    },
-  });
-  await new Promise<void>((resolve) => smtp!.listen(smtpPort, "127.0.0.1", resolve));
+  smtp = await listenForMail(smtpPort, received);
 }
 
 async function waitFor(subject: string, done: (m: MailQueueEntry) => boolean, timeoutMs = 30_000): Promise<MailQueueEntry> {

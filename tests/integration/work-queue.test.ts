@@ -173,7 +173,7 @@ describe("the admin's queue", () => {
     const queue = (await (await readQueue()).json()) as AdminQueue;
     expect(queue.role).toBe("admin");
     const counts = Object.fromEntries(queue.byState.map((s) => [s.state, s.jobs]));
-    expect(counts).toEqual({ draft: 0, planned: 0, released: 1, machining: 0, verified: 0, delivered: 0 });
+    expect(counts).toEqual({ draft: 0, planned: 0, released: 1, machining: 0, held: 0, verified: 0, delivered: 0 });
     expect(queue.longestWaiting[0]!.id).toBe(old.id);
     expect(queue.longestWaiting[0]!.tuner).toBe("Mara Quillon");
     expect(queue.changes.map((c) => c.what)).toEqual(["Took drill #43 off the rack", "Put drill #43 on the rack"]);

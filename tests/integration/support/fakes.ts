@@ -3,7 +3,7 @@
 import { mkdtempSync, readdirSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
-import type { AddressInfo } from "node:net";
+import { createServer, type AddressInfo } from "node:net";
 import { simpleParser, type ParsedMail } from "mailparser";
 import { SMTPServer } from "smtp-server";
 import S3rver from "s3rver";
@@ -65,4 +65,29 @@ export async function startS3Fake(): Promise<S3Fake> {
       rmSync(directory, { recursive: true, force: true });
     },
   };
+}
+
+/** A loopback port nothing listens on (yet): taken from the system, then let go. */
+export async function closedPort(): Promise<number> {
+  const probe = createServer();
+  await new Promise<void>((resolve) => probe.listen(0, "127.0.0.1", resolve));
+  const { port } = probe.address() as AddressInfo;
+  await new Promise((resolve) => probe.close(resolve));
+  return port;
+}
+
+/** An SMTP server on a given port (one that was down until now), keeping what it receives in `received`. */
+export async function listenForMail(port: number, received: ParsedMail[]): Promise<SMTPServer> {
+  const server = new SMTPServer({
+    authOptional: true,
+    disabledCommands: ["STARTTLS"],
+    logger: false,
+    onData(stream, _session, callback) {
+      simpleParser(stream)
+        .then((mail) => received.push(mail))
+        .finally(() => callback());
+    },
+  });
+  await new Promise<void>((resolve) => server.listen(port, "127.0.0.1", resolve));
+  return server;
 }

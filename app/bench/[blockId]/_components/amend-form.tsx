@@ -1,11 +1,10 @@
 "use client";
 
 import { getTextareaProps } from "@conform-to/react";
-import { parseWithZod } from "@conform-to/zod/v4";
 import type { BenchOperation } from "@/db/bench";
 import { useServerForm } from "@/components/forms/use-server-form";
-import { amendSignOffSchema } from "@/lib/bench/sign-off-schema";
-import { amendAction } from "../actions";
+import type { AmendSignOffFields, AmendSignOffInput } from "@/lib/bench/sign-off-schema";
+import { amendAction, type AmendResult } from "../actions";
 import { defaultUnit, fromBenchSI, parseReading, type BenchUnit } from "../bench-units";
 import { ReadingInput, type Entry } from "./reading-input";
 import { FieldError } from "./reading-feedback";
@@ -15,7 +14,7 @@ import { FieldError } from "./reading-feedback";
  * been, in the units the machinist chooses, and why. The first readings stay in the record.
  */
 export function AmendForm({ operation }: { operation: BenchOperation }) {
-  const { form, fields, formProps, lastResult, pending } = useServerForm(amendAction, {
+  const { form, fields, formProps, lastResult, pending } = useServerForm<AmendSignOffFields, AmendSignOffInput, AmendResult>(amendAction, {
     id: `amend-${operation.id}`,
     defaultValue: {
       operationId: operation.id,
@@ -26,9 +25,8 @@ export function AmendForm({ operation }: { operation: BenchOperation }) {
         return { key: m.key, value: recorded ? String(Number(fromBenchSI(recorded.valueSi, unit).toPrecision(6))) : "", unit };
       }),
     },
+    // Checked on the server only: the phone loads no schema library for a form it rarely needs.
     shouldValidate: "onSubmit",
-    shouldRevalidate: "onInput",
-    onValidate: ({ formData }) => parseWithZod(formData, { schema: amendSignOffSchema }),
   });
   const readingFields = fields.readings.getFieldList();
   const entries: Entry[] = operation.planned.map((m, i) => {
