@@ -37,8 +37,12 @@ const NEW = "copper lathe quiet harbor";
 const listJobs = () => listJobsRoute(new Request("http://127.0.0.1/api/jobs"));
 const signIn = (password: string, address = "10.0.7.1") => verifyCredentials({ email: "tuner@blockwright.test", password, address });
 
-async function waitForMail(count: number) {
-  for (let i = 0; i < 50 && mail.messages.length < count; i++) await new Promise((r) => setTimeout(r, 50));
+/** The first message with this subject, waited for (the queue's worker sends it a moment after the answer). */
+async function messageTitled(subject: string) {
+  for (let i = 0; i < 100 && !mail.messages.some((m) => m.subject === subject); i++) await new Promise((r) => setTimeout(r, 50));
+  const found = mail.messages.find((m) => m.subject === subject);
+  expect(found, `a message "${subject}"`).toBeTruthy();
+  return found!;
 }
 
 describe("weak passwords are refused when an account is made", () => {
@@ -68,8 +72,9 @@ describe("changing your own password", () => {
     expect((await listJobs()).status).toBe(401);
     await expect(signIn(DEMO)).rejects.toThrow();
     await expect(signIn(NEW, "10.0.7.2")).resolves.toMatchObject({ role: "tuner" });
-    await waitForMail(1);
-    expect(mail.messages.map((m) => m.subject)).toEqual(["Your Blockwright password was changed"]);
+    await messageTitled("Your Blockwright password was changed");
+    // One notice, however the queue's worker is timed (a message of an earlier test may still arrive beside it).
+    expect(mail.messages.filter((m) => m.subject === "Your Blockwright password was changed")).toHaveLength(1);
   });
 
   it("through the account page's form, then to sign-in", async () => {
@@ -102,8 +107,7 @@ describe("a reset link an admin sends", () => {
       params: Promise.resolve({ id: tuner!.id }),
     });
     expect(response.status).toBe(202);
-    await waitForMail(1);
-    const message = mail.messages.at(-1)!;
+    const message = await messageTitled("Set a new Blockwright password");
     expect(message.to && "text" in message.to ? message.to.text : "").toContain("tuner@blockwright.test");
     const link = /http\S+\/reset-password\?token=([A-Za-z0-9_-]{43})/.exec(message.text ?? "");
     expect(link).toBeTruthy();
