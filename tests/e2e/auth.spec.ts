@@ -26,7 +26,9 @@ for (const role of Object.keys(ACCOUNTS) as DemoRole[]) {
   test(`${role} signs in and sees their home page`, async ({ page }) => {
     await new SignInPage(page).signInAs(role);
     await expect(page.getByRole("heading", { level: 1 })).toContainText(ACCOUNTS[role].name.split(" ")[0]!);
-    await expect(page.getByRole("note", { name: /DANGER: Fuel/ })).toBeVisible();
+    // The home page is the person's work; the cautions are one click away.
+    await expect(page.getByRole("link", { name: /^Safety: \d+ cautions/ })).toBeVisible();
+    await expect(page.getByRole("status").filter({ hasText: "Reading your work" })).toHaveCount(0);
     await page.screenshot({ path: screenshotPath(`home-${role}`), fullPage: true });
     await page.getByRole("button", { name: "Sign out" }).click();
     await expect(page).toHaveURL(/\/sign-in/);
